@@ -1,0 +1,3 @@
+export * from './schema.ts';
+export * from './load.ts';
+export { migrate } from './migrate.ts';

@@ -1,0 +1,61 @@
+import { FORMAT_VERSION } from './schema.ts';
+
+type Json = Record<string, unknown>;
+
+/**
+ * Upgrades older document shapes one version at a time. Version 1 was the early draft
+ * format: points without ids and with a bare number as energy, read in `settings.unit`
+ * (kcal/mol when absent).
+ */
+const MIGRATIONS: Record<number, (doc: Json) => Json> = {
+  1: (doc) => {
+    const settings = (doc.settings ?? {}) as Json;
+    const unit = typeof settings.unit === 'string' ? settings.unit : 'kcal/mol';
+    const pathways = Array.isArray(doc.pathways) ? doc.pathways : [];
+    return {
+      ...doc,
+      version: 2,
+      pathways: pathways.map((pathway: Json, i: number) => ({
+        ...pathway,
+        id: pathway.id ?? `pathway-${i + 1}`,
+        points: (Array.isArray(pathway.points) ? pathway.points : []).map((point: Json, j: number) => ({
+          ...point,
+          id: point.id ?? `p${j + 1}`,
+          energy: typeof point.energy === 'number' ? { mode: 'value', value: point.energy, unit } : point.energy,
+        })),
+      })),
+    };
+  },
+};
+
+/** Result of reading the version header. */
+export type MigrationResult =
+  | { ok: true; doc: Json; migratedFrom?: number }
+  | { ok: false; message: string };
+
+/** Brings a parsed JSON object to the current format version, or explains why not. */
+export function migrate(raw: unknown): MigrationResult {
+  if (typeof raw !== 'object' || raw === null || Array.isArray(raw)) {
+    return { ok: false, message: 'expected a JSON object at the top of the file' };
+  }
+  let doc = raw as Json;
+  if (doc.format !== 'passline') {
+    return { ok: false, message: 'format: expected "passline" (this is not a Passline document)' };
+  }
+  const version = doc.version;
+  if (typeof version !== 'number' || !Number.isInteger(version) || version < 1) {
+    return { ok: false, message: `version: expected a whole format version number, got ${JSON.stringify(version)}` };
+  }
+  if (version > FORMAT_VERSION) {
+    return {
+      ok: false,
+      message: `version: this document uses format version ${version}, written by a newer Passline; this one reads versions up to ${FORMAT_VERSION}. The file was not changed.`,
+    };
+  }
+  for (let v = version; v < FORMAT_VERSION; v++) {
+    const step = MIGRATIONS[v];
+    if (!step) return { ok: false, message: `version: no migration from format version ${v}` };
+    doc = step(doc);
+  }
+  return version < FORMAT_VERSION ? { ok: true, doc, migratedFrom: version } : { ok: true, doc };
+}

@@ -1,0 +1,3 @@
+export * from './constants.ts';
+export * from './energy.ts';
+export * from './thermal.ts';

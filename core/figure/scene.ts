@@ -1,0 +1,82 @@
+/**
+ * The scene: what a figure is made of, in millimetres with y growing downwards.
+ * The layout produces it once; the canvas, SVG, PDF and PNG all draw this same value.
+ */
+
+/** One step of a path: move, line, cubic Bézier, close. */
+export type Segment =
+  | { op: 'M'; x: number; y: number }
+  | { op: 'L'; x: number; y: number }
+  | { op: 'C'; x1: number; y1: number; x2: number; y2: number; x: number; y: number }
+  | { op: 'Z' };
+
+/** How a path is stroked; `dashMm` alternates on/off lengths, absent for solid. */
+export interface Stroke {
+  colour: string;
+  widthMm: number;
+  dashMm?: number[];
+  cap?: 'butt' | 'round';
+}
+
+/** What a primitive stands for, so the canvas can pick and style it. */
+export type Role =
+  | 'background' | 'level' | 'connector' | 'axis' | 'tick' | 'arrow'
+  | 'legend' | 'leader' | 'label' | 'annotation' | 'title';
+
+/** A stroked and/or filled path. */
+export interface PathItem {
+  kind: 'path';
+  role: Role;
+  segments: Segment[];
+  stroke?: Stroke;
+  fill?: string;
+  pathway?: string;
+  point?: string;
+}
+
+/** A run of text at one size, offset from its item's anchor (baseline, left end). */
+export interface TextRun {
+  text: string;
+  dx: number;
+  dy: number;
+  sizeMm: number;
+}
+
+/** Axis-aligned box in mm. */
+export interface Box {
+  x: number;
+  y: number;
+  w: number;
+  h: number;
+}
+
+/** A text item: runs placed relative to an anchor, optionally rotated about it. */
+export interface TextItem {
+  kind: 'text';
+  role: Role;
+  x: number;
+  y: number;
+  runs: TextRun[];
+  colour: string;
+  /** Rotation in degrees, clockwise on the page (SVG sense), about (x, y). */
+  rotateDeg?: number;
+  /** Unrotated bounding box on the page (for rotated text, the rotated extent). */
+  box: Box;
+  pathway?: string;
+  point?: string;
+}
+
+export type SceneItem = PathItem | TextItem;
+
+/** A complete figure. */
+export interface Scene {
+  widthMm: number;
+  heightMm: number;
+  /** Page colour, or null for transparent. */
+  background: string | null;
+  fontFamily: string;
+  items: SceneItem[];
+}
+
+/** Millimetres per typographic point (1 pt = 1/72 in, 1 in = 25.4 mm exactly). */
+export const MM_PER_PT = 25.4 / 72;

@@ -1,0 +1,91 @@
+import type { Finding, ResolvedPathway } from '../profile/types.ts';
+import { checkConditions, readMolecularity } from './conditions.ts';
+import { halfLifeFirstOrder, logEquilibriumConstant, logEyringRate, rateUnit, type RateUnit } from './eyring.ts';
+import { splitSteps, type StepShape } from './steps.ts';
+import type { KineticsOptions, Molecularity, PointRef } from './types.ts';
+
+/** Energetics and Eyring rates of one step; energy-derived values are null when an energy is unknown. */
+export interface KineticStep {
+  index: number;
+  from: PointRef;
+  /** null for a barrierless step (two minima in a row). */
+  ts: PointRef | null;
+  to: PointRef;
+  barrierless: boolean;
+  /** TS − from in J/mol as given (barrierless: max(0, ΔE)). */
+  barrierForwardJ: number | null;
+  /** TS − to in J/mol as given (barrierless: max(0, −ΔE)). */
+  barrierReverseJ: number | null;
+  /** to − from in J/mol. */
+  reactionEnergyJ: number | null;
+  /** The TS lies below a neighbouring minimum; rates then use the TS raised to that minimum. */
+  negativeBarrier: boolean;
+  kForward: number | null;
+  kReverse: number | null;
+  /** ln kForward, finite even where kForward underflows. */
+  logKForward: number | null;
+  logKReverse: number | null;
+  /** K = exp(−ΔE/RT) = kForward/kReverse. */
+  equilibriumConstant: number | null;
+  logEquilibriumConstant: number | null;
+  /** First-order forward half-life ln 2 / kForward, in s. */
+  halfLifeSeconds: number | null;
+  molecularityForward: Molecularity;
+  molecularityReverse: Molecularity;
+  unitForward: RateUnit;
+  unitReverse: RateUnit;
+}
+
+const ref = (p: { id: string; label: string }): PointRef => ({ id: p.id, label: p.label });
+const kj = (j: number) => `${(j / 1000).toFixed(2)} kJ/mol`;
+
+/**
+ * Steps of a pathway with barriers, Eyring rate constants both ways, K and half-life.
+ * Both directions run over the same TS, so kForward/kReverse = K (detailed balance) by
+ * construction. A TS below a neighbouring minimum would give k > κk_BT/h: the step is
+ * flagged `negativeBarrier`, a finding is added, and the rates use the TS raised to the
+ * higher neighbour (a barrierless step), never k above κk_BT/h.
+ */
+export function analyseSteps(pathway: ResolvedPathway, options: KineticsOptions): { steps: KineticStep[]; findings: Finding[] } {
+  const findings = checkConditions(options);
+  if (findings.length > 0) return { steps: [], findings };
+  const split = splitSteps(pathway);
+  findings.push(...split.findings);
+  const steps = split.steps.map((shape) => stepKinetics(pathway, shape, options, findings));
+  return { steps, findings };
+}
+
+function stepKinetics(pathway: ResolvedPathway, shape: StepShape, options: KineticsOptions, findings: Finding[]): KineticStep {
+  const key = shape.ts ?? shape.to;
+  const m = readMolecularity(options.molecularity?.[key.id], { pathway: pathway.id, point: key.id });
+  findings.push(...m.findings);
+  const name = `"${shape.from.label}" → ${shape.ts ? `"${shape.ts.label}" → ` : ''}"${shape.to.label}"`;
+  const base = {
+    index: shape.index, from: ref(shape.from), ts: shape.ts && ref(shape.ts), to: ref(shape.to), barrierless: shape.ts === null,
+    molecularityForward: m.forward, molecularityReverse: m.reverse, unitForward: rateUnit(m.forward), unitReverse: rateUnit(m.reverse),
+  };
+  const a = shape.from.energyJ;
+  const b = shape.to.energyJ;
+  const t = shape.ts === null ? Math.max(a ?? NaN, b ?? NaN) : shape.ts.energyJ;
+  if (a === null || b === null || t === null || Number.isNaN(t)) {
+    findings.push({ severity: 'warning', code: 'step-energy-missing', message: `step ${name} of "${pathway.name}" has an unknown energy; its rates are not computed`, pathway: pathway.id, point: key.id });
+    return { ...base, barrierForwardJ: null, barrierReverseJ: null, reactionEnergyJ: null, negativeBarrier: false, kForward: null, kReverse: null, logKForward: null, logKReverse: null, equilibriumConstant: null, logEquilibriumConstant: null, halfLifeSeconds: null };
+  }
+  const negativeBarrier = shape.ts !== null && (t < a || t < b);
+  if (negativeBarrier) {
+    const below = t < a ? shape.from : shape.to;
+    findings.push({ severity: 'warning', code: 'ts-below-neighbour', message: `in "${pathway.name}", TS "${shape.ts?.label}" lies ${kj((below.energyJ ?? 0) - t)} below "${below.label}"; the step is treated as barrierless (TS raised to the higher minimum) instead of giving k > κk_BT/h`, pathway: pathway.id, point: key.id });
+  }
+  const top = Math.max(t, a, b);
+  const kappa = options.transmission ?? 1;
+  const logKForward = logEyringRate(top - a, options.temperatureK, kappa);
+  const logKReverse = logEyringRate(top - b, options.temperatureK, kappa);
+  const kForward = Math.exp(logKForward);
+  return {
+    ...base, barrierForwardJ: t - a, barrierReverseJ: t - b, reactionEnergyJ: b - a, negativeBarrier,
+    kForward, kReverse: Math.exp(logKReverse), logKForward, logKReverse,
+    equilibriumConstant: Math.exp(logEquilibriumConstant(b - a, options.temperatureK)),
+    logEquilibriumConstant: logEquilibriumConstant(b - a, options.temperatureK),
+    halfLifeSeconds: halfLifeFirstOrder(kForward),
+  };
+}

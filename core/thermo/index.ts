@@ -1,0 +1,26 @@
+/** Thermochemistry and barrier estimates: pure functions, energies in J/mol unless named otherwise. */
+export * from './composition.ts';
+export * from './elements.ts';
+export * from './groups.ts';
+export * from './formulaError.ts';
+export * from './formulaSuffix.ts';
+export * from './formulaBody.ts';
+export { parseFormula, type FormulaOptions, type FormulaResult, type ParsedFormula } from './formula.ts';
+export * from './standardState.ts';
+export * from './ensemble.ts';
+export * from './reaction.ts';
+export * from './reactionBalance.ts';
+export * from './formationValues.ts';
+export * from './reactionSum.ts';
+export * from './hess.ts';
+export * from './equilibrium.ts';
+export * from './solveFormation.ts';
+export * from './formationTable.ts';
+export * from './thermoReport.ts';
+export * from './estimates/marcus.ts';
+export * from './estimates/bep.ts';
+export * from './estimates/inverseEyring.ts';
+export * from './estimates/linearFit.ts';
+export * from './estimates/ratePoints.ts';
+export * from './estimates/eyringFit.ts';
+export * from './estimates/arrhenius.ts';

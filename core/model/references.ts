@@ -24,12 +24,17 @@ export function referenceProblems(doc: Document): DocumentError[] {
     }
     pathway.points.forEach((point, j) => {
       const energy = point.energy;
-      if (energy.mode !== 'species' && energy.mode !== 'formation') return;
-      energy.terms.forEach((term, k) => {
-        if (!speciesIds.has(term.species)) {
-          errors.push({ path: `pathways[${i}].points[${j}].energy.terms[${k}].species`, message: `no species with id "${term.species}"` });
-        }
-      });
+      const lists: [string, { species: string }[] | undefined][] = [
+        ['energy.terms', energy.mode === 'species' || energy.mode === 'formation' ? energy.terms : undefined],
+        ['composition', point.composition],
+      ];
+      for (const [field, terms] of lists) {
+        terms?.forEach((term, k) => {
+          if (!speciesIds.has(term.species)) {
+            errors.push({ path: `pathways[${i}].points[${j}].${field}[${k}].species`, message: `no species with id "${term.species}"` });
+          }
+        });
+      }
     });
   });
   const ref = doc.settings.reference;

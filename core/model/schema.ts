@@ -89,6 +89,11 @@ export const Point = z.strictObject({
   label: z.string(),
   kind: PointKind,
   energy: EnergySpec,
+  /**
+   * What the state is made of, when its energy is not given as species: used for mass
+   * balance, Hess checks, molecularity and microkinetic networks.
+   */
+  composition: z.array(SpeciesTerm).optional(),
   /** Layout overrides, in figure units (slot index) and mm. */
   x: finite('').optional(),
   barWidthMm: positive(' in mm').optional(),

@@ -1,0 +1,20 @@
+import { resolveProfile } from '../profile/resolve.ts';
+import type { CliIo } from './io.ts';
+import { loadInput } from './loadInput.ts';
+import { applySettingOptions } from './options.ts';
+import { analysisReport } from '../report/analysisReport.ts';
+import { analysisText } from '../report/analysisText.ts';
+
+export interface AnalyzeOptions {
+  json?: boolean | undefined;
+  unit?: string | undefined;
+  temperature?: string | undefined;
+}
+
+/** `passline analyze FILE`: resolves the profile and prints points, analysis and findings. */
+export function runAnalyze(file: string, options: AnalyzeOptions, io: CliIo): void {
+  const doc = applySettingOptions(loadInput(file, io), options);
+  const profile = resolveProfile(doc);
+  const report = analysisReport(doc, profile);
+  io.out(options.json ? `${JSON.stringify(report, null, 2)}\n` : analysisText(report));
+}

@@ -1,0 +1,63 @@
+import { parseArgs } from 'node:util';
+import { readFileSync, writeFileSync } from 'node:fs';
+import { CliError, EXIT_OK, EXIT_USAGE, type CliIo } from './io.ts';
+import { runAnalyze } from './analyze.ts';
+import { HELP, VERSION } from './help.ts';
+
+/** The real terminal and filesystem. */
+export const nodeIo: CliIo = {
+  out: (text) => process.stdout.write(text),
+  err: (text) => process.stderr.write(text),
+  readFile: (path) => readFileSync(path, 'utf8'),
+  readBytes: (path) => new Uint8Array(readFileSync(path)),
+  writeFile: (path, data) => writeFileSync(path, data),
+};
+
+type Command = (positionals: string[], values: Record<string, string | boolean | string[] | undefined>, io: CliIo) => void | Promise<void>;
+
+const COMMANDS: Record<string, { options: Record<string, { type: 'string' | 'boolean'; multiple?: boolean }>; run: Command; args: number }> = {
+  analyze: {
+    options: { json: { type: 'boolean' }, unit: { type: 'string' }, temperature: { type: 'string' } },
+    args: 1,
+    run: ([file], v, io) => runAnalyze(file!, { json: v.json as boolean | undefined, unit: v.unit as string | undefined, temperature: v.temperature as string | undefined }, io),
+  },
+};
+
+/** Runs the CLI with the given arguments; returns the exit code. Never throws for user errors. */
+export async function main(argv: string[], io: CliIo = nodeIo): Promise<number> {
+  const [name, ...rest] = argv;
+  if (name === undefined || name === '--help' || name === '-h' || name === 'help') {
+    io.out(HELP);
+    return name === undefined ? EXIT_USAGE : EXIT_OK;
+  }
+  if (name === '--version' || name === '-v') {
+    io.out(`passline ${VERSION}\n`);
+    return EXIT_OK;
+  }
+  const command = COMMANDS[name];
+  if (!command) {
+    io.err(`passline: unknown command "${name}" (try passline --help)\n`);
+    return EXIT_USAGE;
+  }
+  try {
+    let parsed;
+    try {
+      parsed = parseArgs({ args: rest, options: { ...command.options, help: { type: 'boolean' } }, allowPositionals: true, strict: true });
+    } catch (error) {
+      throw new CliError(`${(error as Error).message.split('\n')[0]} (try passline --help)`, EXIT_USAGE);
+    }
+    if (parsed.values.help) { io.out(HELP); return EXIT_OK; }
+    if (parsed.positionals.length !== command.args) {
+      throw new CliError(`${name}: expected ${command.args} file argument${command.args === 1 ? '' : 's'}, got ${parsed.positionals.length} (try passline --help)`, EXIT_USAGE);
+    }
+    await command.run(parsed.positionals, parsed.values, io);
+    return EXIT_OK;
+  } catch (error) {
+    if (error instanceof CliError) {
+      io.err(`passline ${name}: ${error.message}\n`);
+      return error.exitCode;
+    }
+    io.err(`passline ${name}: internal error: ${(error as Error).message}\n`);
+    return 70;
+  }
+}

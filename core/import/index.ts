@@ -1,0 +1,2 @@
+export { importTable, type TableError, type TableImport } from './table.ts';
+export { readDelimited, readNumber } from './delimited.ts';

@@ -1,0 +1,109 @@
+import { makeDocument } from '../model/load.ts';
+import type { Document, EnergySpec, Quantity, Unit } from '../model/schema.ts';
+import { parseEnergyUnit } from '../units/energy.ts';
+import { readDelimited, readNumber } from './delimited.ts';
+
+/** A problem in an imported table, located by line and column. */
+export interface TableError {
+  row: number;
+  column: string;
+  value: string;
+  message: string;
+}
+
+export type TableImport = { ok: true; doc: Document } | { ok: false; errors: TableError[] };
+
+const KNOWN = ['pathway', 'label', 'kind', 'cycle'] as const;
+const ENERGY_HEADER = /^([EHG])\s*\[(.+)\]$/;
+
+interface Columns { pathway: number; label: number; kind: number; cycle: number; energy: number; quantity: Quantity; unit: Unit }
+
+function readHeader(cells: string[], line: number): Columns | TableError[] {
+  const errors: TableError[] = [];
+  const at: Partial<Record<string, number>> = {};
+  let energy: { index: number; quantity: Quantity; unit: Unit } | undefined;
+  cells.forEach((cell, index) => {
+    const name = cell.toLowerCase();
+    const match = ENERGY_HEADER.exec(cell);
+    if ((KNOWN as readonly string[]).includes(name)) at[name] = index;
+    else if (match) {
+      const unit = parseEnergyUnit(match[2]!);
+      if (!unit) errors.push({ row: line, column: cell, value: match[2]!, message: 'unknown energy unit; use kcal/mol, kJ/mol, eV or hartree' });
+      else if (energy) errors.push({ row: line, column: cell, value: cell, message: 'a second energy column; give one energy column per table' });
+      else energy = { index, quantity: match[1] as Quantity, unit };
+    } else {
+      errors.push({ row: line, column: cell || `column ${index + 1}`, value: cell, message: 'unknown column; expected pathway, label, kind, cycle and one energy column such as "G [kcal/mol]"' });
+    }
+  });
+  for (const name of ['pathway', 'label', 'kind'] as const) {
+    if (at[name] === undefined) errors.push({ row: line, column: name, value: '', message: `missing the "${name}" column` });
+  }
+  if (!energy && !errors.some((e) => e.column.match(ENERGY_HEADER))) {
+    errors.push({ row: line, column: 'energy', value: '', message: 'missing an energy column such as "G [kcal/mol]" (E, H or G, unit in brackets)' });
+  }
+  if (errors.length > 0 || !energy) return errors;
+  return { pathway: at.pathway!, label: at.label!, kind: at.kind!, cycle: at.cycle ?? -1, energy: energy.index, quantity: energy.quantity, unit: energy.unit };
+}
+
+function readCycle(cell: string): boolean | undefined {
+  const v = cell.toLowerCase();
+  if (['yes', 'y', 'true', '1'].includes(v)) return true;
+  if (['no', 'n', 'false', '0', ''].includes(v)) return false;
+  return undefined;
+}
+
+/**
+ * Imports a table with one row per stationary point (header
+ * `pathway,label,kind,G [kcal/mol],cycle`) into a new document. Hartree values are
+ * absolute and become relative to each pathway's first point. All or nothing: any bad
+ * row makes the whole import fail with every problem listed.
+ */
+export function importTable(text: string, title = 'Imported table'): TableImport {
+  const { delimiter, rows } = readDelimited(text);
+  const header = rows[0];
+  if (!header) return { ok: false, errors: [{ row: 1, column: '', value: '', message: 'the table is empty; expected a header row' }] };
+  const columns = readHeader(header.cells, header.line);
+  if (Array.isArray(columns)) return { ok: false, errors: columns };
+  const errors: TableError[] = [];
+  const pathways = new Map<string, { cycle: boolean | undefined; cycleRow: number; points: { label: string; kind: 'min' | 'ts'; value: number }[] }>();
+  for (const { line, cells } of rows.slice(1)) {
+    const cell = (i: number) => (i >= 0 ? cells[i] ?? '' : '');
+    const fail = (column: string, value: string, message: string) => errors.push({ row: line, column, value, message });
+    if (cells.length > header.cells.length) fail(`column ${cells.length}`, cells.at(-1) ?? '', `this row has ${cells.length} cells but the header has ${header.cells.length}`);
+    const name = cell(columns.pathway);
+    if (!name) fail('pathway', '', 'expected a pathway name');
+    const kindText = cell(columns.kind).toLowerCase();
+    const kind = kindText === 'min' || kindText === 'ts' ? kindText : undefined;
+    if (!kind) fail('kind', cell(columns.kind), 'expected "min" or "ts"');
+    const value = readNumber(cell(columns.energy), delimiter);
+    if (value === undefined) fail(header.cells[columns.energy]!, cell(columns.energy), 'expected a number');
+    const cycle = columns.cycle >= 0 ? readCycle(cell(columns.cycle)) : false;
+    if (cycle === undefined) fail('cycle', cell(columns.cycle), 'expected yes or no');
+    if (!name || !kind || value === undefined || cycle === undefined) continue;
+    const entry = pathways.get(name) ?? { cycle: undefined, cycleRow: line, points: [] };
+    if (columns.cycle >= 0 && cell(columns.cycle) !== '') {
+      if (entry.cycle !== undefined && entry.cycle !== cycle) fail('cycle', cell(columns.cycle), `pathway "${name}" was marked ${entry.cycle ? 'yes' : 'no'} on line ${entry.cycleRow}`);
+      else if (entry.cycle === undefined) { entry.cycle = cycle; entry.cycleRow = line; }
+    }
+    entry.points.push({ label: cell(columns.label), kind, value });
+    pathways.set(name, entry);
+  }
+  if (errors.length > 0) return { ok: false, errors };
+  if (pathways.size === 0) return { ok: false, errors: [{ row: header.line, column: '', value: '', message: 'the table has a header but no rows' }] };
+  const absolute = columns.unit === 'hartree';
+  const doc = makeDocument({
+    title,
+    settings: { quantity: columns.quantity, unit: absolute ? 'kcal/mol' : columns.unit },
+    pathways: [...pathways].map(([name, entry], i) => {
+      const base = absolute ? entry.points[0]!.value : 0;
+      return {
+        id: `pathway-${i + 1}`, name, cycle: entry.cycle ?? false,
+        points: entry.points.map((p, j) => {
+          const energy: EnergySpec = { mode: 'value', value: p.value - base, unit: columns.unit, quantity: columns.quantity };
+          return { id: `p${j + 1}`, label: p.label, kind: p.kind, energy };
+        }),
+      };
+    }),
+  });
+  return { ok: true, doc };
+}

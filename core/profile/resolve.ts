@@ -1,0 +1,54 @@
+import type { Document } from '../model/schema.ts';
+import { makeContext } from './context.ts';
+import { resolvePathwayRaw, type RawPoint } from './resolvePathway.ts';
+import type { Finding, ResolvedPathway, ResolvedProfile } from './types.ts';
+import { runChecks } from './checks/index.ts';
+
+function referenceFor(doc: Document, pathwayIndex: number, raws: RawPoint[][]): { raw: RawPoint; label: string } | null {
+  const ref = doc.settings.reference;
+  if (ref.kind === 'point') {
+    const pi = doc.pathways.findIndex((p) => p.id === ref.pathway);
+    const qi = pi < 0 ? -1 : doc.pathways[pi]!.points.findIndex((p) => p.id === ref.point);
+    if (qi >= 0) return { raw: raws[pi]![qi]!, label: doc.pathways[pi]!.points[qi]!.label };
+    return null;
+  }
+  const first = raws[pathwayIndex]![0];
+  return first ? { raw: first, label: doc.pathways[pathwayIndex]!.points[0]!.label } : null;
+}
+
+/**
+ * Resolves every point of every pathway to one energy (J/mol) in the document's quantity,
+ * temperature and standard state, relative to the reference state, with provenance and
+ * consistency findings. Pure: the document is not changed.
+ */
+export function resolveProfile(doc: Document): ResolvedProfile {
+  const ctx = makeContext(doc);
+  const findings: Finding[] = [];
+  const raws = doc.pathways.map((pathway) => resolvePathwayRaw(pathway, ctx, findings));
+  const pathways: ResolvedPathway[] = doc.pathways.map((pathway, pi) => {
+    const reference = referenceFor(doc, pi, raws);
+    return {
+      id: pathway.id,
+      name: pathway.name,
+      cycle: pathway.cycle,
+      points: pathway.points.map((point, qi) => {
+        const { raw, provenance } = raws[pi]![qi]!;
+        const where = { pathway: pathway.id, point: point.id };
+        let energyJ: number | null = null;
+        if (raw.valueJ !== null && reference && reference.raw.raw.valueJ !== null) {
+          if (raw.scale === reference.raw.raw.scale) energyJ = raw.valueJ - reference.raw.raw.valueJ;
+          else findings.push({
+            severity: 'error', code: 'no-common-reference', ...where,
+            message: `this point is on the ${raw.scale} scale but the reference "${reference.label}" is on the ${reference.raw.raw.scale} scale; they cannot be subtracted`,
+          });
+        }
+        if (energyJ === null && !findings.some((f) => f.point === point.id && f.pathway === pathway.id && f.severity === 'error')) {
+          findings.push({ severity: 'error', code: 'missing-energy', ...where, message: `no energy could be resolved for "${point.label}"` });
+        }
+        return { id: point.id, label: point.label, kind: point.kind, energyJ, provenance };
+      }),
+    };
+  });
+  findings.push(...runChecks(doc, pathways, ctx));
+  return { quantity: doc.settings.quantity, unit: doc.settings.unit, temperatureK: doc.settings.temperatureK, pathways, findings };
+}

@@ -1,0 +1,16 @@
+import { mount } from 'svelte';
+import App from './App.svelte';
+import { DocumentStore } from './state/documentStore.svelte.ts';
+import { DEMO_FILE_NAME, loadDemo } from './demo/demoDocument.ts';
+import { pickHost } from './host/pickHost.ts';
+import { makeDocument } from '../core/model/load.ts';
+import './styles.css';
+
+const demo = loadDemo();
+const store = new DocumentStore(pickHost(), demo.ok ? demo.doc : makeDocument({ title: '' }), demo.ok ? DEMO_FILE_NAME : 'untitled.passline');
+// A broken bundled demo is our bug, but the user still gets a working, empty app.
+if (!demo.ok) store.problem = { fileName: DEMO_FILE_NAME, errors: demo.errors };
+
+const target = document.getElementById('app');
+if (!target) throw new Error('index.html lacks the #app element');
+mount(App, { target, props: { store } });

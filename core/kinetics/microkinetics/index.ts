@@ -1,0 +1,12 @@
+export { integrate } from './stiffSolver.ts';
+export type { IntegrateOptions, IntegrationResult, JacobianFunction, RhsFunction, SolverFailure, SolverFailureCode, SolverStats } from './solverTypes.ts';
+export { RODAS3, type RosenbrockTableau } from './rodas3.ts';
+export { luDecompose, luSolve } from './luDecompose.ts';
+export type { MassActionNetwork, MassActionReaction, SpeciesCount } from './network.ts';
+export { compileNetwork, type CompiledNetwork } from './compileNetwork.ts';
+export { networkFromReactions, type NetworkError, type NetworkResult, type ReactionInput } from './networkFromReactions.ts';
+export { networkFromPathway, type PathwayNetworkOptions, type PathwayNetworkResult } from './networkFromPathway.ts';
+export { stepRateConstants, type StepConstants } from './stepRateConstants.ts';
+export { simulate } from './simulate.ts';
+export type { SimulateOptions, Simulation, SimulationOutcome } from './simulationTypes.ts';
+export { timeGrid } from './timeGrid.ts';

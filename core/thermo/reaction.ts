@@ -24,7 +24,7 @@ function parseCoefficient(text: string): number {
 
 function parseSide(text: string, side: string): { ok: true; terms: ReactionTerm[] } | { ok: false; message: string } {
   const terms: ReactionTerm[] = [];
-  const pieces = text.trim().split(/\s+\+\s+/);
+  const pieces = text.trim().split(/\s+\+(?=\s|$)/);
   for (const raw of pieces) {
     const piece = raw.trim();
     if (piece === '' || piece === '+') return { ok: false, message: `empty species on the ${side} side (separate species with ' + ')` };

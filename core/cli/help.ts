@@ -15,6 +15,11 @@ Usage:
       --unit U         kcal/mol, kJ/mol, eV, hartree or cm-1
       --temperature K  temperature in kelvin
 
+  passline thermo TABLE --reaction "CH4(g) + 2 O2(g) -> CO2(g) + 2 H2O(l)" [--temperature K] [--json]
+      Reaction thermochemistry by Hess's law from a CSV table of standard formation
+      data (header: species,dfH [kJ/mol],S [J/(mol K)],dfG [kJ/mol]; any value column
+      may be absent): ΔrH°, ΔrS°, ΔrG° both ways, K and the crossover temperature.
+
   passline --help | --version
 
 Exit status: 0 success, 1 bad input (the message names the file, field or row), 2 bad usage.

@@ -2,6 +2,7 @@ import { parseArgs } from 'node:util';
 import { readFileSync, writeFileSync } from 'node:fs';
 import { CliError, EXIT_OK, EXIT_USAGE, type CliIo } from './io.ts';
 import { runAnalyze } from './analyze.ts';
+import { runThermo } from './thermo.ts';
 import { HELP, VERSION } from './help.ts';
 
 /** The real terminal and filesystem. */
@@ -20,6 +21,11 @@ const COMMANDS: Record<string, { options: Record<string, { type: 'string' | 'boo
     options: { json: { type: 'boolean' }, unit: { type: 'string' }, temperature: { type: 'string' } },
     args: 1,
     run: ([file], v, io) => runAnalyze(file!, { json: v.json as boolean | undefined, unit: v.unit as string | undefined, temperature: v.temperature as string | undefined }, io),
+  },
+  thermo: {
+    options: { json: { type: 'boolean' }, reaction: { type: 'string' }, temperature: { type: 'string' } },
+    args: 1,
+    run: ([file], v, io) => runThermo(file!, { json: v.json as boolean | undefined, reaction: v.reaction as string | undefined, temperature: v.temperature as string | undefined }, io),
   },
 };
 

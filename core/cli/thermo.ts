@@ -1,0 +1,42 @@
+import { thermoReport } from '../thermo/thermoReport.ts';
+import { CliError, EXIT_USAGE, type CliIo } from './io.ts';
+import { positiveOption } from './options.ts';
+
+export interface ThermoOptions {
+  reaction?: string | undefined;
+  temperature?: string | undefined;
+  json?: boolean | undefined;
+}
+
+const num = (v: number | null, digits: number) => (v === null ? '—' : v.toFixed(digits));
+
+/** `passline thermo TABLE --reaction "..."`: Hess's-law reaction thermochemistry from formation data. */
+export function runThermo(tablePath: string, options: ThermoOptions, io: CliIo): void {
+  if (!options.reaction) throw new CliError('thermo: --reaction "A + B -> C" is required', EXIT_USAGE);
+  const temperatureK = positiveOption('temperature', options.temperature, 298.15);
+  let text: string;
+  try {
+    text = io.readFile(tablePath);
+  } catch (error) {
+    throw new CliError(`cannot read ${tablePath}: ${(error as NodeJS.ErrnoException).code ?? (error as Error).message}`);
+  }
+  const report = thermoReport(text, options.reaction, temperatureK);
+  if (!report.ok) throw new CliError(`${tablePath}: ${report.message}`);
+  const r = report.result;
+  if (options.json) {
+    const { warnings, ...numbers } = r;
+    io.out(`${JSON.stringify({ ...numbers, warnings }, null, 2)}\n`);
+    return;
+  }
+  io.out([
+    `${options.reaction}   at ${r.temperatureK} K`,
+    `  ΔrH°              ${num(r.dH, 3)} kJ mol⁻¹`,
+    `  ΔrS°              ${num(r.dS, 3)} J mol⁻¹ K⁻¹`,
+    `  ΔrG° (ΔH − TΔS)   ${num(r.dG, 3)} kJ mol⁻¹`,
+    `  ΔrG° (Σ ΔfG°)     ${num(r.dGfromFormation, 3)} kJ mol⁻¹`,
+    `  K                 ${r.K === null ? '—' : r.K.toPrecision(6)}`,
+    `  crossover T       ${r.crossoverK === null ? '—' : `${r.crossoverK.toFixed(1)} K`}`,
+    ...r.warnings.map((w) => `  note: ${w}`),
+    '',
+  ].join('\n'));
+}

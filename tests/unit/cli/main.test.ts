@@ -1,0 +1,105 @@
+import { describe, expect, it } from 'vitest';
+import { execFileSync, spawnSync } from 'node:child_process';
+import { readFileSync } from 'node:fs';
+import { main } from '../../../core/cli/main.ts';
+import type { CliIo } from '../../../core/cli/io.ts';
+
+const root = new URL('../../../', import.meta.url).pathname;
+
+/** Runs the CLI in-process against an in-memory file system. */
+async function run(argv: string[], files: Record<string, string> = {}) {
+  let out = '', err = '';
+  const io: CliIo = {
+    out: (t) => { out += t; }, err: (t) => { err += t; },
+    readFile: (path) => {
+      if (path in files) return files[path]!;
+      try { return readFileSync(new URL(path, `file://${root}`), 'utf8'); } catch { throw Object.assign(new Error('missing'), { code: 'ENOENT' }); }
+    },
+    readBytes: () => new Uint8Array(), writeFile: () => {},
+  };
+  const code = await main(argv, io);
+  return { code, out, err };
+}
+
+describe('passline analyze', () => {
+  it('prints every pathway\'s resolved points of the demo with energies and unit', async () => {
+    const { code, out } = await run(['analyze', 'assets/demo/demo.passline']);
+    expect(code).toBe(0);
+    expect(out).toContain('ΔG / kcal mol⁻¹ at 298.15 K');
+    expect(out).toMatch(/TS1\s+TS\s+\+16\.9\s+kcal mol⁻¹\s+barrier 21\.1 kcal mol⁻¹ from LA·AE/);
+  });
+
+  it('--json gives points with provenance and a checks array; --unit and --temperature apply', async () => {
+    const { code, out } = await run(['analyze', 'assets/demo/demo.passline', '--json', '--unit', 'kJ/mol', '--temperature', '310']);
+    expect(code).toBe(0);
+    const report = JSON.parse(out);
+    expect(report).toMatchObject({ quantity: 'G', unit: 'kJ/mol', temperatureK: 310 });
+    const ts = report.pathways[0].points[1];
+    expect(ts).toMatchObject({ label: 'TS-th', kind: 'ts', provenance: { route: 'typed' } });
+    expect(ts.energy).toBeCloseTo(31.8 * 4.184, 9); // thermochemical calorie (NIST SP 811)
+    expect(report.checks).toEqual([]);
+  });
+
+  it('reads a CSV table and reports its findings in checks', async () => {
+    const csv = 'pathway,label,kind,G [kcal/mol]\nA,R,min,0\nA,T,ts,-2\nA,P,min,-5\n';
+    const { code, out } = await run(['analyze', 'points.csv', '--json'], { 'points.csv': csv });
+    expect(code).toBe(0);
+    const report = JSON.parse(out);
+    expect(report.checks[0]).toMatchObject({ severity: 'error', code: 'ts-below-neighbour', pathway: 'pathway-1', point: 'p2' });
+  });
+
+  it('bad input: exit 1 with one line naming the file and the problem', async () => {
+    const bad = await run(['analyze', 'bad.csv'], { 'bad.csv': 'pathway,label,kind,G [kcal/mol]\nA,R,min,zero\n' });
+    expect(bad).toMatchObject({ code: 1, out: '' });
+    expect(bad.err).toBe('passline analyze: bad.csv: line 2, column "G [kcal/mol]" ("zero"): expected a number\n');
+    const missing = await run(['analyze', 'nowhere.passline']);
+    expect(missing).toMatchObject({ code: 1, err: 'passline analyze: cannot read nowhere.passline: ENOENT\n' });
+    const newer = await run(['analyze', 'new.passline'], { 'new.passline': '{"format":"passline","version":99}' });
+    expect(newer.err).toContain('format version 99, written by a newer Passline');
+  });
+
+  it('bad usage: exit 2', async () => {
+    expect((await run(['analyze'])).code).toBe(2);
+    expect((await run(['analyze', 'a', '--bogus'])).code).toBe(2);
+    expect((await run(['analyze', 'assets/demo/demo.passline', '--unit', 'furlong'])).err).toContain('--unit: unknown unit "furlong"');
+    expect((await run(['frobnicate'])).code).toBe(2);
+    expect((await run([])).code).toBe(2);
+  });
+
+  it('--help and --version', async () => {
+    expect((await run(['--help'])).out).toContain('passline analyze FILE');
+    expect((await run(['--version'])).out).toMatch(/^passline \d+\.\d+\.\d+\n$/);
+  });
+});
+
+describe('passline thermo', () => {
+  const reaction = 'CH4(g) + 2 O2(g) -> CO2(g) + 2 H2O(l)';
+  it('computes methane combustion from NIST-JANAF data (REFERENCE.md §4, R1)', async () => {
+    const { code, out } = await run(['thermo', 'tests/fixtures/janafCombustion.csv', '--reaction', reaction, '--json']);
+    expect(code).toBe(0);
+    const r = JSON.parse(out);
+    expect(r.dH).toBeCloseTo(-890.309, 3);
+    expect(r.dS).toBeCloseTo(-242.85, 3);
+    expect(r.dG).toBeCloseTo(-817.9032725, 6);
+    expect(r.dGfromFormation).toBeCloseTo(-817.903, 3);
+    expect(r.K / 1.95166899547e143).toBeCloseTo(1, 9);
+    expect(r.crossoverK).toBeCloseTo(3666.086061, 5);
+    expect(r.warnings.join(' ')).toContain('not a process-safety assessment');
+  });
+
+  it('names an unknown species, an unbalanced reaction and a missing option', async () => {
+    expect((await run(['thermo', 'tests/fixtures/janafCombustion.csv', '--reaction', 'CH4(g) + 2 O2(g) -> CO2(g) + 2 H2O(g)'])).err).toContain("unknown species 'H2O(g)'");
+    expect((await run(['thermo', 'tests/fixtures/janafCombustion.csv', '--reaction', 'CH4(g) + O2(g) -> CO2(g) + 2 H2O(l)'])).err).toContain('unbalanced: 2 more O on the right');
+    expect((await run(['thermo', 'tests/fixtures/janafCombustion.csv'])).code).toBe(2);
+  });
+});
+
+describe('the installed command', () => {
+  it('runs as a real process through its bin entry, with exit codes', () => {
+    const bin = `${root}core/cli/passline.mjs`;
+    expect(execFileSync('node', [bin, '--version'], { encoding: 'utf8' })).toMatch(/^passline /);
+    const failed = spawnSync('node', [bin, 'analyze', `${root}no-such-file.csv`], { encoding: 'utf8' });
+    expect(failed.status).toBe(1);
+    expect(failed.stderr).not.toContain('    at '); // one line, no stack trace
+  });
+});

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { thermoReport, type ThermoReportResult } from '../../../core/thermo/index.ts';
+import { GAS_CONSTANT } from '../../../core/units/constants.ts';
 import { JANAF_CSV, rel } from './helpers.ts';
 
 const R1 = 'CH4(g) + 2 O2(g) -> CO2(g) + 2 H2O(l)';
@@ -58,6 +59,15 @@ describe('thermoReport at 298.15 K (NIST-JANAF, REFERENCE.md §4)', () => {
   it('warns when the two ΔrG° routes disagree beyond 0.01 kJ/mol', () => {
     const r = report(JANAF_CSV.replace('NH3(g),-45.898,192.774,-16.367', 'NH3(g),-45.898,192.774,-16.0'), R2, 298.15);
     expect(r.warnings.join('\n')).toContain('differ by');
+  });
+});
+
+describe('thermoReport beyond the floating-point range', () => {
+  it('gives K = null and log10 K in a warning when exp(−ΔrG°/RT) overflows', () => {
+    // Invented ΔfG° of −2000 kJ/mol: ln K = 806.8 > ln(Number.MAX_VALUE) = 709.8.
+    const r = report('species,dfG [kJ/mol]\nC(s),0\nO2(g),0\nCO2(g),-2000', 'C(s) + O2(g) -> CO2(g)', 298.15);
+    expect(r.K).toBeNull();
+    expect(r.warnings.join('\n')).toContain(`log10 K = ${(2e6 / (GAS_CONSTANT * 298.15) / Math.LN10).toFixed(3)}`);
   });
 });
 

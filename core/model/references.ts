@@ -37,6 +37,13 @@ export function referenceProblems(doc: Document): DocumentError[] {
       }
     });
   });
+  const pathwayIds = new Set(doc.pathways.map((p) => p.id));
+  doc.comparisons.forEach((c, i) => {
+    const ids = c.type === 'rate' ? { baseline: c.baseline, candidate: c.candidate } : Object.fromEntries(c.pathways.map((id, k) => [`pathways[${k}]`, id]));
+    for (const [field, id] of Object.entries(ids)) {
+      if (!pathwayIds.has(id)) errors.push({ path: `comparisons[${i}].${field}`, message: `no pathway with id "${id}"` });
+    }
+  });
   const ref = doc.settings.reference;
   if (ref.kind === 'point') {
     const pathway = doc.pathways.find((p) => p.id === ref.pathway);

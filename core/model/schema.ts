@@ -149,6 +149,12 @@ export const Figure = z.strictObject({
   ])).default([]),
 });
 
+/** A comparison the user asked for: rate enhancement of one pathway over another, or selectivity between competing pathways. */
+export const Comparison = z.discriminatedUnion('type', [
+  z.strictObject({ type: z.literal('rate'), baseline: z.string(), candidate: z.string() }),
+  z.strictObject({ type: z.literal('selectivity'), pathways: z.array(z.string()).min(2, 'expected at least two pathways'), enantiomeric: z.boolean().default(false) }),
+], { error: (i) => `expected a comparison type (rate, selectivity), got ${describe((i.input as { type?: unknown } | undefined)?.type)}` });
+
 export const Document = z.strictObject({
   format: z.literal(FORMAT_ID, { error: 'expected "passline" (this is not a Passline document)' }),
   version: z.literal(FORMAT_VERSION),
@@ -156,6 +162,7 @@ export const Document = z.strictObject({
   settings: Settings.default(() => Settings.parse({})),
   species: z.array(Species).default([]),
   pathways: z.array(Pathway).default([]),
+  comparisons: z.array(Comparison).default([]),
   figure: Figure.default(() => Figure.parse({})),
 });
 
@@ -172,6 +179,7 @@ export type PathwayStyle = z.infer<typeof PathwayStyle>;
 export type Pathway = z.infer<typeof Pathway>;
 export type Settings = z.infer<typeof Settings>;
 export type Figure = z.infer<typeof Figure>;
+export type Comparison = z.infer<typeof Comparison>;
 export type Document = z.infer<typeof Document>;
 /** A document as it may be written by hand: defaults may be left out. */
 export type DocumentInput = z.input<typeof Document>;

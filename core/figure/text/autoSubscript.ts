@@ -2,13 +2,16 @@ import { ELEMENT_SYMBOLS, GROUP_ABBREVIATIONS } from './elements.ts';
 import type { Span } from './parseMarkup.ts';
 
 const TOKEN = /[A-Za-z0-9()[\]]+/g;
+const DIATOMIC = new Set(['H', 'N', 'O', 'F', 'Cl', 'Br', 'I']);
 const PART = /[A-Z][a-z]*|\d+|[()[\]]/g;
 
 /**
  * Lowers the counts in words that read as chemical formulas (H2O, Pd(PPh3)4, CO2):
  * digits right after an element symbol, a common group abbreviation or a closing bracket.
  * A word that contains anything else (TS1, Int2, 2nd) is left alone, as are leading
- * coefficients. Only baseline spans are touched.
+ * coefficients. A lone symbol with a count (I1, B2, C3) is usually a state's name, so it
+ * is lowered only for the common diatomic elements with count 2 (H2, N2, O2, Cl2, I2).
+ * Only baseline spans are touched.
  */
 export function autoSubscript(spans: readonly Span[]): Span[] {
   const out: Span[] = [];
@@ -36,6 +39,7 @@ export function autoSubscript(spans: readonly Span[]): Span[] {
 function splitFormula(word: string): Span[] {
   const parts = word.match(PART) ?? [];
   if (parts.join('') !== word || !/\d/.test(word)) return [{ text: word, shift: 'base' }];
+  if (parts.length === 2 && !(DIATOMIC.has(parts[0]!) && parts[1] === '2')) return [{ text: word, shift: 'base' }];
   const out: Span[] = [];
   let previous = '';
   for (const part of parts) {

@@ -1,0 +1,61 @@
+import type { Figure } from '../model/schema.ts';
+import type { EnergyUnit } from '../units/energy.ts';
+import type { FontMetrics } from './font/fontMetrics.ts';
+import { formatEnergy } from './formatEnergy.ts';
+import type { Box, TextItem } from './scene.ts';
+import { autoSubscript } from './text/autoSubscript.ts';
+import { layoutRichText, type RichLine } from './text/layoutRichText.ts';
+import { parseMarkup, type Span } from './text/parseMarkup.ts';
+import { textItem } from './text/textItem.ts';
+
+/** Settings shared by all point labels of a figure. */
+export interface LabelStyle {
+  metrics: FontMetrics;
+  sizeMm: number;
+  decimals: number;
+  energyFormat: Figure['energyFormat'];
+  unit: EnergyUnit;
+  daggerOnTs: boolean;
+  autoSubscript: boolean;
+}
+
+/** A point label: its name line (may be empty) over its energy line, measured. */
+export interface LabelBlock {
+  name: RichLine | null;
+  energy: RichLine;
+  energyText: string;
+  w: number;
+  h: number;
+}
+
+/** Gap between the name and energy lines, in em (our choice). */
+const LINE_GAP_EM = 0.05;
+
+/** Builds and measures the label of a level; ‡ is raised after a TS name when asked. */
+export function labelBlock(label: string, kind: 'min' | 'ts', energy: number, style: LabelStyle): LabelBlock {
+  let spans: Span[] = parseMarkup(label);
+  if (style.autoSubscript) spans = autoSubscript(spans);
+  if (kind === 'ts' && style.daggerOnTs && spans.length > 0 && !label.includes('‡')) spans = [...spans, { text: '‡', shift: 'sup' }];
+  const name = spans.length > 0 ? layoutRichText(spans, style.metrics, style.sizeMm) : null;
+  const energyText = formatEnergy(energy, style.decimals, style.energyFormat, style.unit);
+  const energyLine = layoutRichText([{ text: energyText, shift: 'base' }], style.metrics, style.sizeMm);
+  const gap = name ? LINE_GAP_EM * style.sizeMm : 0;
+  const nameH = name ? name.ascent + name.descent : 0;
+  return {
+    name, energy: energyLine, energyText,
+    w: Math.max(name?.width ?? 0, energyLine.width),
+    h: nameH + gap + energyLine.ascent + energyLine.descent,
+  };
+}
+
+/** The text items of a block placed in `box`, each line centred. */
+export function blockItems(block: LabelBlock, box: Box, nameColour: string, energyColour: string, ids: { pathway?: string; point?: string }): TextItem[] {
+  const items: TextItem[] = [];
+  let top = box.y;
+  if (block.name) {
+    items.push(textItem(block.name, box.x + (box.w - block.name.width) / 2, top + block.name.ascent, nameColour, 'label', ids));
+    top += block.name.ascent + block.name.descent + LINE_GAP_EM * (block.energy.runs[0]?.sizeMm ?? 0);
+  }
+  items.push(textItem(block.energy, box.x + (box.w - block.energy.width) / 2, top + block.energy.ascent, energyColour, 'label', ids));
+  return items;
+}

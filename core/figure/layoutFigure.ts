@@ -1,0 +1,83 @@
+import type { Document } from '../model/schema.ts';
+import type { ResolvedProfile } from '../profile/types.ts';
+import { arrowBandHeight, coordinateArrow } from './coordinateArrow.ts';
+import { axisBandWidth, axisItems } from './axis.ts';
+import { collectPoints, type LayoutPoint } from './collectPoints.ts';
+import { energyScale } from './energyScale.ts';
+import { figureContext } from './figureContext.ts';
+import type { FontMetrics } from './font/fontMetrics.ts';
+import { labels } from './labels.ts';
+import { labelBlock } from './labelBlock.ts';
+import { legend } from './legend.ts';
+import { levels, type PlacedLevel } from './levels.ts';
+import { pathPieces } from './pathPieces.ts';
+import { pathwayPaint, type PathwayPaint } from './pathwayPaint.ts';
+import { figureSize, type Preset } from './presets.ts';
+import type { Scene, SceneItem } from './scene.ts';
+import { THEMES, type ThemeName } from './themes.ts';
+
+/** Options that are not in the document, or override it for one export. */
+export interface LayoutOptions {
+  /** Metrics of the font every output will embed (see readFontMetrics). */
+  metrics: FontMetrics;
+  preset?: Preset;
+  widthMm?: number;
+  heightMm?: number;
+  theme?: ThemeName;
+  /** Lower digits in formula-like words of labels (H2O → H₂O). Default false. */
+  autoSubscript?: boolean;
+}
+
+/**
+ * Lays a resolved profile out as a scene in mm: levels at shared slots, connectors,
+ * labels placed clear of bars and of each other, y axis, reaction-coordinate arrow and
+ * legend, all per the document's figure settings. Deterministic: the same inputs give
+ * the same scene.
+ */
+export function layoutFigure(profile: ResolvedProfile, doc: Document, options: LayoutOptions): Scene {
+  const fig = doc.figure;
+  const theme = THEMES[options.theme ?? fig.theme];
+  const size = figureSize(options.preset ?? fig.preset, options.widthMm ?? fig.widthMm, options.heightMm ?? fig.heightMm);
+  const ctx = figureContext(doc, profile.unit, options.metrics, theme, size, options.autoSubscript ?? false);
+  const pathways = collectPoints(profile, doc);
+  const paints = pathways.map((p) => pathwayPaint(p.index, doc.pathways.find((d) => d.id === p.id)?.style, theme, fig.connector));
+  const margin = 2 * ctx.gapMm + 0.5 * ctx.sizeMm;
+
+  const known = pathways.flatMap((p) => p.points).filter((q): q is LayoutPoint & { energy: number } => q.energy !== null);
+  const probe = energyScale(known.map((q) => q.energy), 1, 0);
+  const left = fig.showAxis ? margin + axisBandWidth(ctx, probe.ticks.map(probe.format)) : margin;
+  const x1 = size.widthMm - margin;
+  const top = fig.showLegend ? margin : 0;
+  const key = fig.showLegend ? legend(ctx, pathways, paints, left, x1, top) : { items: [], heightMm: 0 };
+  const y0 = Math.max(margin, top + key.heightMm);
+  const y1 = size.heightMm - (fig.showCoordinateArrow ? arrowBandHeight(ctx) + margin / 2 : margin);
+  const plot = { x: left, y: y0, w: x1 - left, h: y1 - y0 };
+
+  // Room for a label above the highest and below the lowest level.
+  const tallest = Math.max(0, ...known.slice(0, 200).map((q) => labelBlock(q.label, q.kind, q.energy, { ...ctx, decimals: doc.settings.decimals, energyFormat: fig.energyFormat, daggerOnTs: fig.daggerOnTs }).h));
+  const pad = tallest + 3 * ctx.gapMm;
+  const scale = energyScale(known.map((q) => q.energy), y1 - pad, y0 + pad);
+
+  const slots = pathways.flatMap((p) => p.points.map((q) => q.slot));
+  const lo = Math.min(0, ...slots);
+  const spacing = plot.w / (Math.max(0, ...slots) - lo + 1);
+  const defaultHalf = Math.min(0.3 * spacing, 7);
+  const place = (q: LayoutPoint): PlacedLevel | null => q.energy === null ? null : {
+    point: q, x: plot.x + (q.slot - lo + 0.5) * spacing, y: scale.y(q.energy), halfWidth: q.barWidthMm !== undefined ? q.barWidthMm / 2 : defaultHalf,
+  };
+
+  const items: SceneItem[] = [];
+  if (fig.showAxis) items.push(...axisItems(ctx, scale, plot.x, margin));
+  const placed: PlacedLevel[] = [];
+  pathways.forEach((p, i) => {
+    const drawn = levels(ctx, p, paints[i]!, place);
+    items.push(...drawn.items);
+    placed.push(...drawn.placed);
+  });
+  const paintByIndex = new Map<number, PathwayPaint>(pathways.map((p, i) => [p.index, paints[i]!]));
+  const soft = items.flatMap((item) => item.kind === 'path' && item.role === 'connector' ? pathPieces(item.segments, item.stroke!.widthMm / 2) : []);
+  items.push(...labels(ctx, placed, paintByIndex, plot, soft).items);
+  items.push(...key.items);
+  if (fig.showCoordinateArrow) items.push(...coordinateArrow(ctx, plot.x, x1, y1 + margin / 2));
+  return { widthMm: size.widthMm, heightMm: size.heightMm, background: theme.background, fontFamily: options.metrics.family, items };
+}

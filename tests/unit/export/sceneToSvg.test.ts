@@ -1,0 +1,64 @@
+import { describe, expect, it } from 'vitest';
+import { JSDOM } from 'jsdom';
+import { layoutFigure } from '../../../core/figure/layoutFigure.ts';
+import { sceneToSvg } from '../../../core/export/sceneToSvg.ts';
+import { fontMetrics } from '../figure/fontFixture.ts';
+import { fixture, twoPathways } from '../figure/profileFixture.ts';
+
+const metrics = fontMetrics();
+const { window } = new JSDOM('');
+
+/** Parses with jsdom's strict XML parser; throws on a parse error. */
+function parseSvg(svg: string): Document {
+  const xml = new window.DOMParser().parseFromString(svg, 'image/svg+xml');
+  const error = xml.getElementsByTagName('parsererror')[0];
+  if (error) throw new Error(`not well-formed XML: ${error.textContent}`);
+  return xml;
+}
+
+describe('sceneToSvg', () => {
+  it('writes well-formed SVG sized in mm with a matching viewBox and a named font', () => {
+    const { doc, profile } = twoPathways({ preset: 'single' });
+    const xml = parseSvg(sceneToSvg(layoutFigure(profile, doc, { metrics })));
+    const root = xml.documentElement;
+    expect(root.namespaceURI).toBe('http://www.w3.org/2000/svg');
+    expect(root.getAttribute('width')).toBe('85mm');
+    const [, , w, h] = root.getAttribute('viewBox')!.split(' ').map(Number);
+    expect(w).toBe(85);
+    expect(`${h}mm`).toBe(root.getAttribute('height'));
+    expect(root.getAttribute('font-family')).toMatch(/^DejaVu Sans/);
+  });
+
+  it('keeps text as text elements', () => {
+    const { doc, profile } = twoPathways();
+    const xml = parseSvg(sceneToSvg(layoutFigure(profile, doc, { metrics })));
+    const all = [...xml.getElementsByTagName('text')].map((t) => t.textContent);
+    expect(all).toContain('ΔG / kcal mol⁻¹');
+    expect(all).toContain('TS1‡');
+    expect(all).toContain('Reaction coordinate');
+  });
+
+  it('keeps hostile labels inert and intact', () => {
+    const hostile = `<script>alert("x")</script> & 'q' ]]>`;
+    const { doc, profile } = fixture([
+      { id: 'a', name: '<b onload="x()">A&B</b>', points: [[hostile, 'min', 0], ['B', 'min', -1]] },
+      { id: 'b', name: 'other', points: [['C', 'min', 1]] },
+    ]);
+    const svg = sceneToSvg(layoutFigure(profile, doc, { metrics }));
+    const xml = parseSvg(svg);
+    expect(xml.getElementsByTagName('script')).toHaveLength(0);
+    expect(xml.getElementsByTagName('b')).toHaveLength(0);
+    const all = [...xml.getElementsByTagName('text')].map((t) => t.textContent);
+    expect(all).toContain(hostile);
+    expect(all).toContain('<b onload="x()">A&B</b>');
+  });
+
+  it('embeds the font as a data URL when asked', () => {
+    const { doc, profile } = twoPathways();
+    const bytes = new Uint8Array([0, 1, 0, 0, 255, 254]);
+    const svg = sceneToSvg(layoutFigure(profile, doc, { metrics }), { embedFont: bytes });
+    const style = parseSvg(svg).getElementsByTagName('style')[0]!.textContent!;
+    // Base64 of 00 01 00 00 FF FE (RFC 4648 §4) worked by hand: AAEAAP/+
+    expect(style).toContain("src:url(data:font/ttf;base64,AAEAAP/+) format('truetype')");
+  });
+});

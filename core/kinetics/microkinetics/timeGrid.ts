@@ -16,9 +16,9 @@ export function timeGrid(until: number, points: number, logTime: boolean, from: 
 
 /**
  * A first plotted time a hundredth of the fastest time scale of the network, so the
- * earliest relaxation shows on a log axis: 0.01/max(k·c^(m−1)), never below until·1e-15.
+ * earliest relaxation shows on a log axis: 0.01/max(k·c^(m−1)), never below until·1e-24 (24 decades on one axis is already more than a plot can show).
  */
 export function firstLogTime(until: number, points: number, fastestRate: number): number {
   const guess = fastestRate > 0 ? 0.01 / fastestRate : until / points;
-  return Math.min(Math.max(guess, until * 1e-15), until / 10);
+  return Math.min(Math.max(guess, until * 1e-24), until / 10);
 }

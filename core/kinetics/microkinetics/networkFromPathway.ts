@@ -4,12 +4,14 @@ import type { MassActionNetwork, MassActionReaction } from './network.ts';
 import { pathwaySteps } from './pathwaySteps.ts';
 import { stepRateConstants } from './stepRateConstants.ts';
 
+/** Conditions for turning a pathway into rate constants. */
 export interface PathwayNetworkOptions {
   temperatureK: number;
   /** Transmission coefficient κ (default 1). */
   transmission?: number;
 }
 
+/** A network with warnings, or the error findings that prevent one. */
 export type PathwayNetworkResult =
   | { ok: true; network: MassActionNetwork; findings: Finding[] }
   | { ok: false; errors: Finding[] };

@@ -17,6 +17,7 @@ export interface NetworkError {
   message: string;
 }
 
+/** A network, or every problem found in the input. */
 export type NetworkResult = { ok: true; network: MassActionNetwork } | { ok: false; errors: NetworkError[] };
 
 /** Largest molecularity accepted: termolecular steps are already rare (common practice). */

@@ -24,6 +24,7 @@ export function makeWorkspace(n: number, tableau: RosenbrockTableau): StepWorksp
   };
 }
 
+/** Outcome of one step: done, a singular iteration matrix, or non-finite values. */
 export type StepStatus = 'ok' | 'singular' | 'non-finite';
 
 /**

@@ -2,6 +2,7 @@ import type { Finding } from '../../profile/types.ts';
 import type { NetworkError } from './networkFromReactions.ts';
 import type { SolverStats } from './solverTypes.ts';
 
+/** Settings of `simulate`; only the end time is required. */
 export interface SimulateOptions {
   /** End time, s. */
   until: number;
@@ -39,4 +40,5 @@ export interface Simulation {
   stats: SolverStats;
 }
 
+/** A simulation, or the input problems (with paths) or solver failure that stopped it. */
 export type SimulationOutcome = { ok: true; simulation: Simulation } | { ok: false; errors: NetworkError[] };

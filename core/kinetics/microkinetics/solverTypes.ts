@@ -4,6 +4,7 @@ export type RhsFunction = (y: Float64Array, dydt: Float64Array) => void;
 /** Writes the Jacobian ∂f_i/∂y_j row-major (index i·n + j) into `out`, which arrives zeroed. */
 export type JacobianFunction = (y: Float64Array, out: Float64Array) => void;
 
+/** Settings of `integrate`; every field is optional. */
 export interface IntegrateOptions {
   /** Relative tolerance (default 1e-6). */
   rtol?: number;
@@ -30,8 +31,10 @@ export interface SolverStats {
   luDecompositions: number;
 }
 
+/** Why an integration stopped early. */
 export type SolverFailureCode = 'invalid-input' | 'step-underflow' | 'max-steps' | 'non-finite';
 
+/** A failed integration: the reason, a readable message and where it stopped. */
 export interface SolverFailure {
   code: SolverFailureCode;
   message: string;

@@ -3,6 +3,7 @@ import { readFileSync, writeFileSync } from 'node:fs';
 import { CliError, EXIT_OK, EXIT_USAGE, type CliIo } from './io.ts';
 import { runAnalyze } from './analyze.ts';
 import { runThermo } from './thermo.ts';
+import { runSimulate } from './simulate.ts';
 import { HELP, VERSION } from './help.ts';
 
 /** The real terminal and filesystem. */
@@ -26,6 +27,11 @@ const COMMANDS: Record<string, { options: Record<string, { type: 'string' | 'boo
     options: { json: { type: 'boolean' }, reaction: { type: 'string' }, temperature: { type: 'string' } },
     args: 1,
     run: ([file], v, io) => runThermo(file!, { json: v.json as boolean | undefined, reaction: v.reaction as string | undefined, temperature: v.temperature as string | undefined }, io),
+  },
+  simulate: {
+    options: { until: { type: 'string' }, points: { type: 'string' }, init: { type: 'string', multiple: true }, pathway: { type: 'string' }, temperature: { type: 'string' } },
+    args: 1,
+    run: ([file], v, io) => runSimulate(file!, { until: v.until as string | undefined, points: v.points as string | undefined, init: v.init as string[] | undefined, pathway: v.pathway as string | undefined, temperature: v.temperature as string | undefined }, io),
   },
 };
 

@@ -103,3 +103,31 @@ describe('the installed command', () => {
     expect(failed.stderr).not.toContain('    at '); // one line, no stack trace
   });
 });
+
+describe('passline simulate', () => {
+  // REFERENCE.md §6, cycle A (Kozuch & Shaik energetic span; steady state by SciPy/mpmath): TOF = 1.66434592407551e-4 s⁻¹.
+  const cycleA = JSON.stringify({
+    format: 'passline', version: 2,
+    pathways: [{ id: 'A', name: 'Cycle A', cycle: true, points: [
+      ['I1', 'min', 0], ['T1', 'ts', 12], ['I2', 'min', -6], ['T2', 'ts', 15], ['I3', 'min', -4.5], ['T3', 'ts', 16.5], ['I4', 'min', -3], ['T4', 'ts', 8], ['I1′', 'min', -2],
+    ].map(([label, kind, value]) => ({ id: `${label}`, label, kind, energy: { mode: 'value', value, unit: 'kcal/mol' } })) }],
+  });
+
+  it('prints concentrations as CSV and the simulated steady-state TOF of a cycle', async () => {
+    const { code, out, err } = await run(['simulate', 'a.passline', '--until', '2000', '--points', '20'], { 'a.passline': cycleA });
+    expect(code).toBe(0);
+    const rows = out.trim().split('\n');
+    expect(rows[0]).toBe('time [s],I1 [mol/L],I2 [mol/L],I3 [mol/L],I4 [mol/L],conversion');
+    expect(rows).toHaveLength(22);
+    const last = rows.at(-1)!.split(',').map(Number);
+    expect(last[1]! + last[2]! + last[3]! + last[4]!).toBeCloseTo(1, 9); // catalyst is conserved
+    const tof = Number(/steady-state TOF \(simulated\): (\S+) s⁻¹/.exec(err)?.[1]);
+    expect(Math.abs(tof / 1.66434592407551e-4 - 1)).toBeLessThan(1e-4);
+  });
+
+  it('names a bad --init and an unknown pathway', async () => {
+    expect((await run(['simulate', 'a.passline', '--init', 'I9=1'], { 'a.passline': cycleA })).err).toContain('"I9" is not a minimum of "Cycle A"');
+    expect((await run(['simulate', 'a.passline', '--init', 'I1=-1'], { 'a.passline': cycleA })).code).toBe(2);
+    expect((await run(['simulate', 'a.passline', '--pathway', 'nope'], { 'a.passline': cycleA })).err).toContain('no pathway "nope"');
+  });
+});

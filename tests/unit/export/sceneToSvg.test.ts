@@ -1,11 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { JSDOM } from 'jsdom';
+import { createRequire } from 'node:module';
 import { layoutFigure } from '../../../core/figure/layoutFigure.ts';
 import { sceneToSvg } from '../../../core/export/sceneToSvg.ts';
 import { fontMetrics } from '../figure/fontFixture.ts';
 import { fixture, twoPathways } from '../figure/profileFixture.ts';
 
 const metrics = fontMetrics();
+// jsdom ships no type declarations here; only its DOMParser is used.
+const { JSDOM } = createRequire(import.meta.url)('jsdom') as { JSDOM: new (html: string) => { window: { DOMParser: typeof DOMParser } } };
 const { window } = new JSDOM('');
 
 /** Parses with jsdom's strict XML parser; throws on a parse error. */

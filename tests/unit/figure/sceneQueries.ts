@@ -31,7 +31,7 @@ export function labelBoxes(scene: Scene): Box[] {
 /** Boxes of the level bars, their stroke thickness included. */
 export function barBoxes(scene: Scene): Box[] {
   return paths(scene, 'level').map((p) => {
-    const [a, b] = p.segments as [{ x: number; y: number }, { x: number; y: number }];
+    const [a, b] = p.segments as unknown as [{ x: number; y: number }, { x: number; y: number }];
     const half = p.stroke!.widthMm / 2;
     return { x: a.x, y: a.y - half, w: b.x - a.x, h: 2 * half };
   });

@@ -33,12 +33,23 @@ function typedExpectations(doc: Document) {
   return rows;
 }
 
+// Console errors include Content-Security-Policy violations: the strict policy must hold.
+const consoleErrors = new WeakMap<object, string[]>();
+
 test.beforeEach(async ({ page }) => {
+  const errors: string[] = [];
+  consoleErrors.set(page, errors);
+  page.on('console', (message) => { if (message.type() === 'error') errors.push(message.text()); });
+  page.on('pageerror', (error) => errors.push(error.message));
   // Force the download route of the browser host: a native save picker cannot be driven headless.
   await page.addInitScript(() => {
     delete (window as { showSaveFilePicker?: unknown }).showSaveFilePicker;
   });
   await page.goto('/');
+});
+
+test.afterEach(({ page }) => {
+  expect(consoleErrors.get(page)).toEqual([]);
 });
 
 test('shows the demo pathways with their energies and unit', async ({ page }) => {
@@ -90,11 +101,11 @@ test('save as downloads text that loads as the same document', async ({ page }) 
 
 test('a valid file opened replaces the document', async ({ page }) => {
   const other = { ...JSON.parse(demoText), title: 'Second scenario (invented)' };
-  other.pathways = other.pathways.slice(0, 1);
+  other.pathways[0].name = 'Renamed route';
   const chooser = page.waitForEvent('filechooser');
   await page.getByRole('button', { name: 'Open…' }).click();
   await (await chooser).setFiles({ name: 'second.passline', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(other)) });
   await expect(page.getByRole('heading', { level: 1 })).toHaveText('Second scenario (invented)');
-  await expect(page.getByRole('table')).toHaveCount(1);
+  await expect(page.getByRole('table', { name: 'Renamed route', exact: true })).toBeVisible();
   await expect(page.getByRole('status')).toHaveText('Opened second.passline.');
 });

@@ -4,6 +4,7 @@ import { resolveProfile } from '../../core/profile/resolve.ts';
 import type { ResolvedProfile } from '../../core/profile/types.ts';
 import { DOCUMENT_EXTENSION, type HostApi } from '../host/hostApi.ts';
 import { suggestFileName } from './suggestFileName.ts';
+import { userMessage } from './userMessage.ts';
 
 /** Why the last open failed, for the alert region. */
 export interface OpenProblem {
@@ -88,7 +89,7 @@ export class DocumentStore {
     try {
       await task();
     } catch (error) {
-      const message = error instanceof Error ? error.message : String(error);
+      const message = userMessage(error);
       this.status = `Could not ${verb}: ${message}`;
       if (verb === 'open') this.problem = { fileName: '', errors: [{ path: '(file)', message }] };
     } finally {

@@ -1,0 +1,69 @@
+import { readFontMetrics } from '../figure/font/fontMetrics.ts';
+import { layoutFigure } from '../figure/layoutFigure.ts';
+import type { Preset } from '../figure/presets.ts';
+import type { ThemeName } from '../figure/themes.ts';
+import type { Document } from '../model/schema.ts';
+import type { ResolvedProfile } from '../profile/types.ts';
+import { sceneToPdf, type FontSubsetter } from './sceneToPdf.ts';
+import { sceneToSvg } from './sceneToSvg.ts';
+
+export type FigureFormat = 'svg' | 'pdf' | 'png';
+
+/** Rasterises SVG text to PNG bytes (resvg in Node; see renderFigure.node.ts). */
+export type Rasteriser = (svg: string, widthMm: number, dpi: number) => Uint8Array | Promise<Uint8Array>;
+
+/** What to render; anything left out comes from the document's figure settings. */
+export interface RenderOptions {
+  format: FigureFormat;
+  /** The TrueType font to measure with and embed (DejaVu Sans from assets/fonts). */
+  fontBytes: Uint8Array;
+  widthMm?: number;
+  heightMm?: number;
+  preset?: Preset;
+  theme?: ThemeName;
+  /** PNG resolution, dots per inch (default 300). */
+  dpi?: number;
+  autoSubscript?: boolean;
+  /** Embed the font in SVG output as a data URL. */
+  embedFontInSvg?: boolean;
+  subsetFont?: FontSubsetter;
+  rasterise?: Rasteriser;
+}
+
+/** Largest and smallest accepted values (our limits: beyond them files get silly). */
+const LIMITS = { dpi: [36, 2400], sizeMm: [10, 2000] } as const;
+
+/** A message naming the bad option, or null when the options can be rendered. */
+export function checkRenderOptions(options: Pick<RenderOptions, 'dpi' | 'widthMm' | 'heightMm'>): string | null {
+  const { dpi, widthMm, heightMm } = options;
+  if (dpi !== undefined && !(dpi >= LIMITS.dpi[0] && dpi <= LIMITS.dpi[1])) return `dpi: expected ${LIMITS.dpi[0]}–${LIMITS.dpi[1]}, got ${dpi}`;
+  for (const [name, v] of [['width', widthMm], ['height', heightMm]] as const) {
+    if (v !== undefined && !(v >= LIMITS.sizeMm[0] && v <= LIMITS.sizeMm[1])) return `${name}: expected ${LIMITS.sizeMm[0]}–${LIMITS.sizeMm[1]} mm, got ${v}`;
+  }
+  return null;
+}
+
+/**
+ * Lays the profile out and writes it as SVG (a string), PDF or PNG (bytes). PNG needs a
+ * `rasterise` function; options must pass checkRenderOptions (otherwise this throws).
+ */
+export async function renderFigure(profile: ResolvedProfile, doc: Document, options: RenderOptions): Promise<Uint8Array | string> {
+  const problem = checkRenderOptions(options);
+  if (problem) throw new RangeError(`renderFigure: ${problem}`);
+  const metrics = readFontMetrics(options.fontBytes);
+  const scene = layoutFigure(profile, doc, {
+    metrics,
+    ...(options.preset ? { preset: options.preset } : {}),
+    ...(options.theme ? { theme: options.theme } : {}),
+    ...(options.widthMm !== undefined ? { widthMm: options.widthMm } : {}),
+    ...(options.heightMm !== undefined ? { heightMm: options.heightMm } : {}),
+    ...(options.autoSubscript !== undefined ? { autoSubscript: options.autoSubscript } : {}),
+  });
+  if (options.format === 'pdf') {
+    return sceneToPdf(scene, { fontBytes: options.fontBytes, ...(options.subsetFont ? { subsetFont: options.subsetFont } : {}), title: doc.title || 'Energy profile' });
+  }
+  const svg = sceneToSvg(scene, options.embedFontInSvg && options.format === 'svg' ? { embedFont: options.fontBytes } : {});
+  if (options.format === 'svg') return svg;
+  if (!options.rasterise) throw new Error('renderFigure: PNG output needs a rasteriser (use renderFigure from renderFigure.node.ts)');
+  return options.rasterise(svg, scene.widthMm, options.dpi ?? 300);
+}

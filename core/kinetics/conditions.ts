@@ -17,6 +17,8 @@ export function checkConditions(options: KineticsOptions): Finding[] {
   return findings;
 }
 
+const DEFAULT_MOLECULARITY = Object.freeze({ forward: 1 as const, reverse: 1 as const, findings: Object.freeze([]) as unknown as Finding[] });
+
 /** True for 1, 2 or 3. */
 export function isMolecularity(value: unknown): value is Molecularity {
   return value === 1 || value === 2 || value === 3;
@@ -30,7 +32,8 @@ export function readMolecularity(
   entry: StepMolecularity | undefined,
   where: { pathway: string; point: string },
 ): { forward: Molecularity; reverse: Molecularity; findings: Finding[] } {
-  const raw = entry === undefined ? { forward: 1, reverse: 1 } : typeof entry === 'number' ? { forward: entry, reverse: 1 } : entry;
+  if (entry === undefined) return DEFAULT_MOLECULARITY;
+  const raw = typeof entry === 'number' ? { forward: entry, reverse: 1 } : entry;
   const findings: Finding[] = [];
   const pick = (value: number, side: string): Molecularity => {
     if (isMolecularity(value)) return value;

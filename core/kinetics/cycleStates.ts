@@ -45,7 +45,8 @@ export function cycleStates(pathway: ResolvedPathway): { states: CycleStates | n
   const findings: Finding[] = [];
   let from = first;
   let ts: ResolvedPoint | null = null;
-  for (const p of pts.slice(1)) {
+  for (let k = 1; k < pts.length; k++) {
+    const p = pts[k]!;
     if (p.kind === 'ts') {
       if (ts !== null) return fail('consecutive-ts', `TS "${ts.label}" and TS "${p.label}" follow each other with no intermediate between`, p.id);
       ts = p;

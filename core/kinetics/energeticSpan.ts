@@ -60,10 +60,19 @@ export function energeticSpan(pathway: ResolvedPathway, options: { temperatureK:
   const { temperatureK } = options;
   const kappa = options.transmission ?? 1;
   const rt = rtJoules(temperatureK);
-  const tsE = Float64Array.from(transitionStates, (s) => s.energyJ);
-  const intE = Float64Array.from(intermediates, (s) => s.energyJ);
+  const n = intermediates.length;
+  const tsE = new Float64Array(n);
+  const intE = new Float64Array(n);
+  const t = new Float64Array(n);
+  const a = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    tsE[i] = transitionStates[i]!.energyJ;
+    intE[i] = intermediates[i]!.energyJ;
+    t[i] = tsE[i]! / rt;
+    a[i] = -intE[i]! / rt;
+  }
   const g = reactionEnergyJ / rt;
-  const sums = spanSums(tsE.map((e) => e / rt), intE.map((e) => -e / rt), g);
+  const sums = spanSums(t, a, g);
   const logPrefactor = Math.log(kappa * kbtOverH(temperatureK));
   // |1 − e^g| in log form: ln(−expm1(g)) for g < 0, g + ln(−expm1(−g)) for g > 0 (no overflow).
   const logNumerator = g < 0 ? Math.log(-Math.expm1(g)) : g > 0 ? g + Math.log(-Math.expm1(-g)) : -Infinity;
@@ -72,7 +81,7 @@ export function energeticSpan(pathway: ResolvedPathway, options: { temperatureK:
   if (g > 0) findings.push({ severity: 'warning', code: 'endergonic-cycle', message: `cycle "${pathway.name}" is endergonic (ΔG_r = ${(reactionEnergyJ / 1000).toFixed(2)} kJ/mol > 0): the net turnover runs backwards and the TOF is negative`, pathway: pathway.id });
   if (g === 0) findings.push({ severity: 'info', code: 'thermoneutral-cycle', message: `cycle "${pathway.name}" has ΔG_r = 0: no net turnover at equilibrium, TOF = 0`, pathway: pathway.id });
   const control = (states: CycleState[], logs: Float64Array): ControlledState[] =>
-    states.map((s, i) => ({ ...s, xTof: Math.exp(logs[i]! - sums.logTotal) }));
+    states.map((s, i) => ({ id: s.id, label: s.label, energyJ: s.energyJ, origin: s.origin, xTof: Math.exp(logs[i]! - sums.logTotal) }));
   const tsControl = control(transitionStates, sums.logByTs);
   const intControl = control(intermediates, sums.logByIntermediate);
   const top = largestSpan(tsE, intE, reactionEnergyJ);

@@ -19,26 +19,27 @@ export function splitSteps(pathway: ResolvedPathway): { steps: StepShape[]; find
   const findings: Finding[] = [];
   const where = (point: ResolvedPoint) => ({ pathway: pathway.id, point: point.id });
   let from: ResolvedPoint | null = null;
-  let pending: ResolvedPoint[] = [];
+  let ts: ResolvedPoint | null = null;
+  let extraTs: ResolvedPoint | null = null;
   for (const point of pathway.points) {
     if (point.kind === 'ts') {
       if (from === null) {
         findings.push({ severity: 'error', code: 'starts-with-ts', message: `pathway "${pathway.name}" starts with TS "${point.label}": a step needs a minimum before its TS`, ...where(point) });
-      } else pending.push(point);
+      } else if (ts === null) ts = point;
+      else extraTs ??= point;
       continue;
     }
     if (from !== null) {
-      const [ts, second] = pending;
-      if (second !== undefined) {
-        findings.push({ severity: 'error', code: 'consecutive-ts', message: `pathway "${pathway.name}": TS "${ts?.label}" and TS "${second.label}" follow each other with no minimum between; the step "${from.label}" → "${point.label}" is left out`, ...where(second) });
-      } else steps.push({ index: steps.length, from, ts: ts ?? null, to: point });
+      if (extraTs !== null) {
+        findings.push({ severity: 'error', code: 'consecutive-ts', message: `pathway "${pathway.name}": TS "${ts?.label}" and TS "${extraTs.label}" follow each other with no minimum between; the step "${from.label}" → "${point.label}" is left out`, ...where(extraTs) });
+      } else steps.push({ index: steps.length, from, ts, to: point });
     }
     from = point;
-    pending = [];
+    ts = null;
+    extraTs = null;
   }
-  const last = pending[0];
-  if (last !== undefined) {
-    findings.push({ severity: 'error', code: 'ends-with-ts', message: `pathway "${pathway.name}" ends with TS "${last.label}": a step needs a minimum after its TS`, ...where(last) });
+  if (ts !== null) {
+    findings.push({ severity: 'error', code: 'ends-with-ts', message: `pathway "${pathway.name}" ends with TS "${ts.label}": a step needs a minimum after its TS`, ...where(ts) });
   }
   return { steps, findings };
 }

@@ -39,6 +39,7 @@ export interface CompetingPathways {
   pair: PairSelectivity | null;
 }
 
+/** The assumption behind `competingPathways`, for display beside its numbers. */
 export const CURTIN_HAMMETT_ASSUMPTION = 'Curtin–Hammett control: the states before the selectivity-deciding TSs interconvert faster than they react, so only the TS energies on the common reference decide the product ratio';
 
 /**

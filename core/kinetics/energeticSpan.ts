@@ -40,6 +40,7 @@ export interface EnergeticSpan {
   intermediates: ControlledState[];
 }
 
+/** The turnover ordering the span numbers follow (REFERENCE.md §6 convention), for display beside results. */
 export const SPAN_CONVENTION = 'one turnover is I₁ → T₁ → I₂ → … → I_N → T_N → I₁′; T_i is the TS right after I_i; I₁′ = I₁ + ΔG_r; a TS counts as after intermediate j when i ≥ j';
 
 /**

@@ -16,4 +16,5 @@ export * from './energeticSpan.ts';
 export * from './selectivity.ts';
 export * from './productDistribution.ts';
 export * from './compare.ts';
+export * from './pathwayAtTemperature.ts';
 export * from './temperatureScan.ts';

@@ -2,6 +2,7 @@ import type { Finding, ResolvedPathway } from '../profile/types.ts';
 import { competingPathways } from './compare.ts';
 import { energeticSpan } from './energeticSpan.ts';
 import { analyseSteps } from './stepKinetics.ts';
+import { pathwayAtTemperature, type PointThermo } from './pathwayAtTemperature.ts';
 import type { StepMolecularity } from './types.ts';
 
 /** Temperatures from `startK` to `endK` inclusive, `count` evenly spaced values. */
@@ -9,12 +10,6 @@ export interface ScanRange {
   startK: number;
   endK: number;
   count: number;
-}
-
-/** Enthalpy and entropy of a point relative to the reference: G(T) = H − T·S. */
-export interface PointThermo {
-  hJ: number;
-  sJPerK: number;
 }
 
 /** What to scan: pathways, the range and optional per-pathway inputs keyed by pathway id, then point id. */
@@ -48,7 +43,9 @@ export interface TemperatureScan {
   findings: Finding[];
 }
 
+/** Approximation statement when G values are held while T changes. */
 export const HELD_G = 'G values held at their input temperature; only k_BT/h and RT change';
+/** Statement when G(T) comes from per-point ΔH and ΔS. */
 export const G_FROM_H_S = 'G(T) = H − T·S from the given ΔH and ΔS of every point (ΔH and ΔS taken constant)';
 
 /**
@@ -76,18 +73,10 @@ function spaced({ startK, endK, count }: ScanRange): number[] {
   return Array.from({ length: count }, (_, i) => (count === 1 ? startK : startK + ((endK - startK) * i) / (count - 1)));
 }
 
-/** The pathway with its energies at temperature t (H − TS when complete thermo is given). */
 function atTemperature(p: ResolvedPathway, t: number, input: ScanInput, findings: Finding[]): ResolvedPathway {
-  const thermo = input.thermo?.[p.id];
-  if (thermo === undefined || !complete(p, thermo, t === input.range.startK ? findings : [])) return p;
-  return { ...p, points: p.points.map((q) => ({ ...q, energyJ: thermo[q.id]!.hJ - t * thermo[q.id]!.sJPerK })) };
-}
-
-function complete(p: ResolvedPathway, thermo: Readonly<Record<string, PointThermo>>, findings: Finding[]): boolean {
-  const lacking = p.points.filter((q) => thermo[q.id] === undefined);
-  if (lacking.length === 0) return true;
-  findings.push({ severity: 'warning', code: 'thermo-incomplete', message: `pathway "${p.name}": ΔH/ΔS missing for ${lacking.map((q) => `"${q.label}"`).join(', ')}; its G values are held constant instead`, pathway: p.id, point: lacking[0]?.id });
-  return false;
+  const r = pathwayAtTemperature(p, t, input.thermo?.[p.id]);
+  if (t === input.range.startK) findings.push(...r.findings);
+  return r.pathway;
 }
 
 function scanOne(p: ResolvedPathway, temps: number[], variants: ResolvedPathway[], input: ScanInput, findings: Finding[]): PathwayScan {

@@ -34,7 +34,7 @@ function tryInstallElectron() {
     return false;
   }
   console.log('Electron\'s binary is missing; fetching it once (node node_modules/electron/install.js) ...');
-  const result = spawnSync(process.execPath, [installer], { stdio: 'inherit', timeout: 300_000 });
+  const result = spawnSync(process.execPath, [installer], { stdio: 'inherit', timeout: 120_000 });
   return result.status === 0 && electronBinary() !== null;
 }
 
@@ -45,17 +45,23 @@ function noDisplayReason() {
   return 'this Linux session has no graphical display (neither DISPLAY nor WAYLAND_DISPLAY is set)';
 }
 
+/** Stops `child` when this launcher is told to stop, so no server is left behind. */
+function forwardStops(child) {
+  for (const signal of ['SIGINT', 'SIGTERM', 'SIGHUP']) process.on(signal, () => child.kill(signal));
+}
+
 function serveInBrowser(reason) {
   console.log(
     `\nPassline cannot open its desktop window: ${reason}. ` +
-    'The same app runs in your browser instead: it is being served from the built files below, ' +
-    'with the demo document loaded; opening a file uses the browser\'s file picker and saving downloads ' +
-    'the file (or asks where to save it, in browsers that allow that). To get the desktop app, make sure ' +
-    'node_modules/electron can download its binary (an internet connection, or ELECTRON_MIRROR pointing at a reachable mirror) ' +
+    'It runs in your web browser instead, with the demo document loaded: the same built app is served ' +
+    'on this computer only (127.0.0.1). There, Open… uses the browser\'s file picker, and Save as… ' +
+    'downloads the file or, in browsers that allow it, asks where to save it. For the desktop app, let ' +
+    'Electron fetch its binary (an internet connection, or ELECTRON_MIRROR set to a reachable mirror) ' +
     'and run `npm start` again. Press Ctrl+C to stop the server.\n',
   );
   const vite = join(dirname(require.resolve('vite/package.json')), 'bin', 'vite.js');
   const server = spawn(process.execPath, [vite, 'preview', '--host', '127.0.0.1', '--port', '4173'], { cwd: root, stdio: 'inherit' });
+  forwardStops(server);
   server.on('exit', (code) => process.exit(code ?? 0));
   console.log('Open the address the server prints below (normally http://127.0.0.1:4173/) in your browser.\n');
 }
@@ -63,11 +69,16 @@ function serveInBrowser(reason) {
 function start() {
   const skipInstall = process.env.PASSLINE_SKIP_ELECTRON_INSTALL === '1';
   const found = electronBinary() ?? (!skipInstall && tryInstallElectron() ? electronBinary() : null);
-  if (!found) return serveInBrowser('Electron\'s binary is not installed and could not be downloaded');
+  if (!found) {
+    return serveInBrowser(skipInstall
+      ? 'Electron\'s binary is not installed (its download was skipped because PASSLINE_SKIP_ELECTRON_INSTALL=1)'
+      : 'Electron\'s binary is not installed and could not be downloaded');
+  }
   const display = noDisplayReason();
   if (display) return serveInBrowser(display);
   const startedAt = Date.now();
   const child = spawn(found.binary, [root], { stdio: 'inherit' });
+  forwardStops(child);
   child.on('error', (error) => serveInBrowser(`Electron did not start (${error.message})`));
   child.on('exit', (code, signal) => {
     // A crash within seconds is a missing system library or similar, not the user quitting.

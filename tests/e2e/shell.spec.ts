@@ -109,3 +109,10 @@ test('a valid file opened replaces the document', async ({ page }) => {
   await expect(page.getByRole('table', { name: 'Renamed route', exact: true })).toBeVisible();
   await expect(page.getByRole('status')).toHaveText('Opened second.passline.');
 });
+
+test('the built page carries the strict Content-Security-Policy', async ({ page }) => {
+  const csp = await page.locator('meta[http-equiv="Content-Security-Policy"]').getAttribute('content');
+  expect(csp).toContain("script-src 'self';");
+  expect(csp).toMatch(/style-src 'self'\s*;/);
+  expect(csp).not.toContain('unsafe');
+});

@@ -1,0 +1,29 @@
+import { describe, expect, it } from 'vitest';
+import { render, screen } from '@testing-library/svelte';
+import FindingsList from '../../../../ui/components/FindingsList.svelte';
+import type { ResolvedPathway } from '../../../../core/profile/types.ts';
+
+const pathways: ResolvedPathway[] = [{
+  id: 'cat', name: 'Catalysed', cycle: false,
+  points: [{ id: 'ts1', label: 'TS1', kind: 'ts', energyJ: 0, provenance: { route: 'typed', detail: '', approximations: [] } }],
+}];
+
+describe('FindingsList', () => {
+  it('lists each finding with its severity and where it applies, by the names people see', () => {
+    render(FindingsList, {
+      pathways,
+      findings: [
+        { severity: 'warning', code: 'ts-below-neighbour', message: 'lies below a neighbouring minimum', pathway: 'cat', point: 'ts1' },
+        { severity: 'info', code: 'note', message: 'a document-wide note' },
+      ],
+    });
+    const items = screen.getAllByRole('listitem').map((li) => li.textContent?.replace(/\s+/g, ' ').trim());
+    expect(items).toEqual(['warning Catalysed, TS1: lies below a neighbouring minimum', 'info a document-wide note']);
+    expect(screen.getByRole('heading', { name: 'Findings (2)' })).toBeTruthy();
+  });
+
+  it('shows nothing when there are no findings', () => {
+    render(FindingsList, { pathways, findings: [] });
+    expect(screen.queryByRole('list')).toBeNull();
+  });
+});

@@ -9,16 +9,30 @@ export interface SlotPoint {
  * Horizontal slots for every point of every pathway. By default point i sits in slot i.
  * The k-th point labelled L in a pathway shares the slot of the k-th L seen in earlier
  * pathways (so shared states line up), as long as slots keep increasing along the
- * pathway; points between two such anchors are spread evenly between them.
+ * pathway; points between two such anchors are spread evenly between them. A pathway
+ * that shares no state with earlier ones and has fewer points is spread over their width.
  */
 export function assignSlots(pathways: readonly (readonly SlotPoint[])[]): number[][] {
   const seen = new Map<string, number[]>();
-  return pathways.map((points) => {
-    const anchors = findAnchors(points, seen);
-    const slots = fillBetween(points.length, anchors);
-    register(points, slots, seen);
-    return slots;
+  const slots = pathways.map((points) => {
+    const own = fillBetween(points.length, findAnchors(points, seen));
+    register(points, own, seen);
+    return own;
   });
+  // A shorter pathway sharing no state with any other spans the same width (e.g. an
+  // uncatalysed route drawn with a catalysed one: same start and end).
+  const widest = Math.max(0, ...slots.flat());
+  return slots.map((own, p) => {
+    const points = pathways[p]!;
+    const n = points.length;
+    const isolated = n >= 2 && points.every((q) => q.x === undefined && !sharedElsewhere(q.label, p, pathways));
+    return isolated && widest > n - 1 ? own.map((_, i) => (i * widest) / (n - 1)) : own;
+  });
+}
+
+function sharedElsewhere(label: string, p: number, pathways: readonly (readonly SlotPoint[])[]): boolean {
+  const key = label.trim();
+  return key !== '' && pathways.some((other, o) => o !== p && other.some((q) => q.label.trim() === key));
 }
 
 function findAnchors(points: readonly SlotPoint[], seen: Map<string, number[]>): Map<number, number> {

@@ -23,12 +23,12 @@ export interface FigureContext {
 }
 
 /** Derives the shared sizes from the document's figure settings. */
-export function figureContext(doc: Document, unit: EnergyUnit, metrics: FontMetrics, theme: Theme, size: { widthMm: number; heightMm: number }, autoSubscript: boolean): FigureContext {
-  const sizeMm = doc.figure.fontSizePt * MM_PER_PT;
+export function figureContext(doc: Document, unit: EnergyUnit, metrics: FontMetrics, theme: Theme, size: { widthMm: number; heightMm: number }, autoSubscript: boolean, textScale = 1): FigureContext {
+  const sizeMm = doc.figure.fontSizePt * MM_PER_PT * textScale;
   return {
     doc, unit, metrics, theme, ...size, sizeMm, autoSubscript,
     lineMm: (metrics.ascent + metrics.descent) * sizeMm,
-    strokeMm: doc.figure.lineWidthPt * MM_PER_PT,
+    strokeMm: doc.figure.lineWidthPt * MM_PER_PT * textScale,
     gapMm: Math.max(0.3, 0.12 * sizeMm),
   };
 }

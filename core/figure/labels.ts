@@ -20,7 +20,7 @@ interface Group {
  * off the connectors where a spot near the bar allows.
  * Returns the items and the label boxes (for tests and hit-testing).
  */
-export function labels(ctx: FigureContext, placed: readonly PlacedLevel[], paints: ReadonlyMap<number, PathwayPaint>, plot: Box, soft: readonly Box[]): { items: SceneItem[]; boxes: Box[] } {
+export function labels(ctx: FigureContext, placed: readonly PlacedLevel[], paints: ReadonlyMap<number, PathwayPaint>, bounds: Box, soft: readonly Box[]): { items: SceneItem[]; boxes: Box[] } {
   const style: LabelStyle = {
     metrics: ctx.metrics, sizeMm: ctx.sizeMm, decimals: ctx.doc.settings.decimals,
     energyFormat: ctx.doc.figure.energyFormat, unit: ctx.unit, daggerOnTs: ctx.doc.figure.daggerOnTs, autoSubscript: ctx.autoSubscript,
@@ -39,7 +39,7 @@ export function labels(ctx: FigureContext, placed: readonly PlacedLevel[], paint
     prefer: level.point.kind === 'ts' ? 'above' : 'below',
     ...(level.point.labelOffsetMm ? { fixed: level.point.labelOffsetMm } : {}),
   }));
-  const placements = placeLabels(requests, { hard: placed.map((l) => barBox(l, ctx)), soft }, plot, ctx.gapMm);
+  const placements = placeLabels(requests, { hard: placed.map((l) => barBox(l, ctx)), soft }, bounds, ctx.gapMm);
   const items: SceneItem[] = [];
   const boxes = placements.map((p) => p.box);
   groups.forEach((g, i) => {

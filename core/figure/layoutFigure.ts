@@ -12,7 +12,7 @@ import { legend } from './legend.ts';
 import { levels, type PlacedLevel } from './levels.ts';
 import { pathPieces } from './pathPieces.ts';
 import { pathwayPaint, type PathwayPaint } from './pathwayPaint.ts';
-import { figureSize, type Preset } from './presets.ts';
+import { figureSize, PRESETS, type Preset } from './presets.ts';
 import type { Scene, SceneItem } from './scene.ts';
 import { THEMES, type ThemeName } from './themes.ts';
 
@@ -37,8 +37,9 @@ export interface LayoutOptions {
 export function layoutFigure(profile: ResolvedProfile, doc: Document, options: LayoutOptions): Scene {
   const fig = doc.figure;
   const theme = THEMES[options.theme ?? fig.theme];
-  const size = figureSize(options.preset ?? fig.preset, options.widthMm ?? fig.widthMm, options.heightMm ?? fig.heightMm);
-  const ctx = figureContext(doc, profile.unit, options.metrics, theme, size, options.autoSubscript ?? false);
+  const preset = options.preset ?? fig.preset;
+  const size = figureSize(preset, options.widthMm ?? fig.widthMm, options.heightMm ?? fig.heightMm);
+  const ctx = figureContext(doc, profile.unit, options.metrics, theme, size, options.autoSubscript ?? false, PRESETS[preset].textScale);
   const pathways = collectPoints(profile, doc);
   const paints = pathways.map((p) => pathwayPaint(p.index, doc.pathways.find((d) => d.id === p.id)?.style, theme, fig.connector));
   const margin = 2 * ctx.gapMm + 0.5 * ctx.sizeMm;
@@ -76,7 +77,9 @@ export function layoutFigure(profile: ResolvedProfile, doc: Document, options: L
   });
   const paintByIndex = new Map<number, PathwayPaint>(pathways.map((p, i) => [p.index, paints[i]!]));
   const soft = items.flatMap((item) => item.kind === 'path' && item.role === 'connector' ? pathPieces(item.segments, item.stroke!.widthMm / 2) : []);
-  items.push(...labels(ctx, placed, paintByIndex, plot, soft).items);
+  // Labels may reach into the right margin, never over the axis.
+  const labelBounds = { ...plot, w: size.widthMm - ctx.gapMm - plot.x };
+  items.push(...labels(ctx, placed, paintByIndex, labelBounds, soft).items);
   items.push(...key.items);
   if (fig.showCoordinateArrow) items.push(...coordinateArrow(ctx, plot.x, x1, y1 + margin / 2));
   return { widthMm: size.widthMm, heightMm: size.heightMm, background: theme.background, fontFamily: options.metrics.family, items };

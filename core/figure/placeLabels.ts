@@ -28,12 +28,13 @@ export interface Obstacles {
 }
 
 /**
- * Greedy, deterministic placement: labels are taken in the order given; each tries spots
- * at growing distance from its bar — preferred side, other side, then right and left of
- * the bar — and takes the first whose box (grown by `gap`) touches no bar and no label
- * placed before it, inside `bounds`; spots close to the bar that also miss the soft
- * obstacles are tried first. If nothing fits inside, the label goes just above
- * everything (outside the bounds but still clear), so boxes never overlap.
+ * Greedy, deterministic placement: labels are taken in the order given; each looks at
+ * spots at growing distance from its bar — above and below, then right and left of it —
+ * and takes the cheapest whose box (grown by `gap`) touches no bar and no label placed
+ * before it and lies inside `bounds`. Cost grows with the distance; the non-preferred
+ * side, a spot beside the bar and crossing a soft obstacle (a connector) cost extra.
+ * If nothing fits inside, the label goes just above everything (outside the bounds but
+ * still clear), so boxes never overlap.
  */
 export function placeLabels(requests: readonly LabelRequest[], obstacles: Obstacles, bounds: Box, gap: number, step = 0.5): Placement[] {
   const cell = Math.max(2, ...requests.slice(0, 50).map((r) => r.w));
@@ -43,35 +44,43 @@ export function placeLabels(requests: readonly LabelRequest[], obstacles: Obstac
   obstacles.soft.forEach(soft.add);
   return requests.map((r) => {
     const home = spot(r, r.prefer, 0, gap);
-    let placement: Placement;
-    if (r.fixed) placement = { box: { ...home, x: home.x + r.fixed.dx, y: home.y + r.fixed.dy }, displaced: false };
-    else {
-      const clear = (b: Box) => !hard.hits(b, gap);
-      const found = search(r, bounds, gap, step, 2 * r.h, (b) => clear(b) && !soft.hits(b, 0)) ?? search(r, bounds, gap, step, bounds.h + r.h, clear);
-      placement = found ?? { box: { ...home, y: Math.min(hard.top(), bounds.y) - 2 * gap - r.h }, displaced: true };
-    }
+    const placement: Placement = r.fixed
+      ? { box: { ...home, x: home.x + r.fixed.dx, y: home.y + r.fixed.dy }, displaced: false }
+      : cheapest(r, bounds, gap, step, (b) => !hard.hits(b, gap), (b) => soft.hits(b, 0))
+        ?? { box: { ...home, y: Math.min(hard.top(), bounds.y) - 2 * gap - r.h }, displaced: true };
     hard.add(placement.box);
     return placement;
   });
 }
 
-function search(r: LabelRequest, bounds: Box, gap: number, step: number, reach: number, free: (b: Box) => boolean): Placement | undefined {
+function cheapest(r: LabelRequest, bounds: Box, gap: number, step: number, free: (b: Box) => boolean, crossesSoft: (b: Box) => boolean): Placement | undefined {
   const other = r.prefer === 'above' ? 'below' : 'above';
-  const limit = Math.ceil(reach / step);
+  const limit = Math.ceil((bounds.h + r.h) / step);
+  // Extra costs in mm, as multiples of the label height (our tuning).
+  const [otherSide, beside, soft] = [0.3 * r.h, 2 * r.h, r.h];
+  let best: { placement: Placement; cost: number } | undefined;
   for (let i = 0; i <= limit; i++) {
     const d = i * step;
+    if (best && d >= best.cost) break;
     const far = d > r.h;
-    const candidates: Placement[] = [
-      { box: spot(r, r.prefer, d, gap), displaced: far },
-      { box: spot(r, other, d, gap), displaced: far },
-      { box: side(r, 'right', d, gap), displaced: far },
-      { box: side(r, 'right', -d, gap), displaced: far },
-      { box: side(r, 'left', d, gap), displaced: far },
-      { box: side(r, 'left', -d, gap), displaced: far },
+    const candidates: [Box, number][] = [
+      [spot(r, r.prefer, d, gap), d],
+      [spot(r, other, d, gap), d + otherSide],
+      [side(r, 'right', d, gap), d + beside],
+      [side(r, 'right', -d, gap), d + beside],
+      [side(r, 'left', d, gap), d + beside],
+      [side(r, 'left', -d, gap), d + beside],
     ];
-    for (const c of candidates) if (inside(c.box, bounds) && free(c.box)) return c;
+    for (const [raw, base] of candidates) {
+      if (best && base >= best.cost) continue;
+      // Slide a label sideways into the bounds rather than lose a spot next to its bar.
+      const box = { ...raw, x: Math.min(Math.max(raw.x, bounds.x), bounds.x + bounds.w - raw.w) };
+      if (!inside(box, bounds) || !free(box)) continue;
+      const cost = base + (crossesSoft(box) ? soft : 0);
+      if (!best || cost < best.cost) best = { placement: { box, displaced: far }, cost };
+    }
   }
-  return undefined;
+  return best?.placement;
 }
 
 function spot(r: LabelRequest, where: 'above' | 'below', d: number, gap: number): Box {

@@ -5,7 +5,11 @@ const pts = (...labels: string[]) => labels.map((label) => ({ label }));
 
 describe('assignSlots', () => {
   it('puts point i in slot i by default', () => {
-    expect(assignSlots([pts('a', 'b', 'c'), pts('x', 'y')])).toEqual([[0, 1, 2], [0, 1]]);
+    expect(assignSlots([pts('a', 'b', 'c'), pts('x', 'y', 'z')])).toEqual([[0, 1, 2], [0, 1, 2]]);
+  });
+
+  it('spreads a shorter pathway that shares nothing over the full width', () => {
+    expect(assignSlots([pts('a', 'b', 'c', 'd', 'e'), pts('x', 'y', 'z')])).toEqual([[0, 1, 2, 3, 4], [0, 2, 4]]);
   });
 
   it('lines up states with the same label and spreads the points between them', () => {

@@ -1,0 +1,33 @@
+import { describe, expect, it } from 'vitest';
+import { readFileSync } from 'node:fs';
+import { parseDocument } from '../../../core/model/load.ts';
+import { resolveProfile } from '../../../core/profile/resolve.ts';
+import { layoutFigure } from '../../../core/figure/layoutFigure.ts';
+import { fontMetrics } from './fontFixture.ts';
+import { barBoxes, intersects, labelBoxes, paths } from './sceneQueries.ts';
+
+const text = readFileSync(new URL('../../../assets/demo/demo.passline', import.meta.url), 'utf8');
+
+describe('the demo figure', () => {
+  const loaded = parseDocument(text);
+  if (!loaded.ok) throw new Error(JSON.stringify(loaded.errors));
+  const profile = resolveProfile(loaded.doc);
+
+  for (const preset of ['single', 'double', 'slide'] as const) {
+    for (const connector of ['dashed', 'curve'] as const) {
+      it(`keeps labels clear of bars and each other (${preset}, ${connector})`, () => {
+        const doc = { ...loaded.doc, figure: { ...loaded.doc.figure, connector } };
+        const scene = layoutFigure(profile, doc, { metrics: fontMetrics(), preset });
+        expect(paths(scene, 'level').length).toBeGreaterThan(0);
+        const boxes = labelBoxes(scene);
+        const bars = barBoxes(scene);
+        boxes.forEach((a, i) => {
+          for (const b of bars) expect(intersects(a, b)).toBe(false);
+          for (const b of boxes.slice(i + 1)) expect(intersects(a, b)).toBe(false);
+          // Every label stays on the page.
+          expect(a.x >= 0 && a.y >= 0 && a.x + a.w <= scene.widthMm && a.y + a.h <= scene.heightMm).toBe(true);
+        });
+      });
+    }
+  }
+});

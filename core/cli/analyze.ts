@@ -1,4 +1,4 @@
-import { resolveProfile } from '../profile/resolve.ts';
+import { analyseDocument } from '../analysis/analyseDocument.ts';
 import type { CliIo } from './io.ts';
 import { loadInput } from './loadInput.ts';
 import { applySettingOptions } from './options.ts';
@@ -14,7 +14,6 @@ export interface AnalyzeOptions {
 /** `passline analyze FILE`: resolves the profile and prints points, analysis and findings. */
 export function runAnalyze(file: string, options: AnalyzeOptions, io: CliIo): void {
   const doc = applySettingOptions(loadInput(file, io), options);
-  const profile = resolveProfile(doc);
-  const report = analysisReport(doc, profile);
+  const report = analysisReport(doc, analyseDocument(doc));
   io.out(options.json ? `${JSON.stringify(report, null, 2)}\n` : analysisText(report));
 }

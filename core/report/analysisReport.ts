@@ -1,20 +1,35 @@
+import type { DocumentAnalysis } from '../analysis/analyseDocument.ts';
 import type { Document, Quantity, Unit } from '../model/schema.ts';
-import type { Finding, Provenance, ResolvedProfile } from '../profile/types.ts';
+import type { Finding, Provenance } from '../profile/types.ts';
+import type { PointRef } from '../kinetics/types.ts';
 import { fromJoulesPerMol } from '../units/energy.ts';
 
 /** A point as printed by `analyze --json`: energy in the display unit. */
-export interface ReportPoint {
-  label: string;
-  kind: 'min' | 'ts';
-  energy: number | null;
-  provenance: Provenance;
+export interface ReportPoint { label: string; kind: 'min' | 'ts'; energy: number | null; provenance: Provenance }
+
+export interface ReportStep {
+  from: string; ts: string | null; to: string;
+  barrierForward: number | null; barrierReverse: number | null; reactionEnergy: number | null;
+  kForward: number | null; kReverse: number | null; kForwardUnit: string; kReverseUnit: string;
+  equilibriumConstant: number | null; halfLifeSeconds: number | null; barrierless: boolean; negativeBarrier: boolean;
 }
 
 export interface ReportPathway {
   name: string;
   cycle: boolean;
   points: ReportPoint[];
+  steps: ReportStep[];
+  effectiveBarrier: { value: number; ts: string; intermediate: string; halfLifeSeconds: number | null; reading: string | null } | null;
+  reactionEnergy: number | null;
+  energeticSpan: null | {
+    deltaE: number; tdts: string; tdi: string; tof: number; tofApprox: number; apparentBarrier: number | null;
+    reactionEnergy: number; degreeOfTofControl: Record<string, number>; convention: string;
+  };
 }
+
+export type ReportComparison =
+  | { type: 'rate'; baseline: string; candidate: string; ddG: number | null; rateRatio: number | null; log10RateRatio: number | null }
+  | { type: 'selectivity'; pathways: string[]; assumption: string | null; products: { pathway: string; percent: number; effectiveTs: number }[]; ratio: number | null; ddG: number | null; er: number | null; ee: number | null };
 
 /** The machine-readable analysis of a document (the `analyze --json` contract). */
 export interface AnalysisReport {
@@ -23,23 +38,56 @@ export interface AnalysisReport {
   unit: Unit;
   temperatureK: number;
   pathways: ReportPathway[];
+  comparisons: ReportComparison[];
   checks: Finding[];
 }
 
-/** Builds the analysis report of a resolved document, energies in its display unit. */
-export function analysisReport(doc: Document, profile: ResolvedProfile): AnalysisReport {
+/** Labels are shown as written; a label that repeats in a cycle's X_TOF table gets its id. */
+function controlKey(ref: PointRef, taken: Record<string, number>): string {
+  return ref.label in taken ? `${ref.label} (${ref.id})` : ref.label;
+}
+
+/** Builds the analysis report, energies in the document's display unit, rates in SI. */
+export function analysisReport(doc: Document, analysis: DocumentAnalysis): AnalysisReport {
+  const { profile } = analysis;
   const unit = profile.unit;
-  const toUnit = (j: number | null) => (j === null ? null : fromJoulesPerMol(j, unit));
+  const e = (j: number) => fromJoulesPerMol(j, unit);
+  const en = (j: number | null) => (j === null ? null : e(j));
+  const nameOf = (id: string) => profile.pathways.find((p) => p.id === id)?.name ?? id;
   return {
     title: doc.title,
     quantity: profile.quantity,
     unit,
     temperatureK: profile.temperatureK,
-    pathways: profile.pathways.map((pathway) => ({
-      name: pathway.name,
-      cycle: pathway.cycle,
-      points: pathway.points.map((p) => ({ label: p.label, kind: p.kind, energy: toUnit(p.energyJ), provenance: p.provenance })),
-    })),
-    checks: profile.findings,
+    pathways: analysis.pathways.map(({ pathway, steps, effectiveBarrier: eb, feasibility, energeticSpan: span }) => {
+      const known = pathway.points.filter((p) => p.energyJ !== null);
+      const control: Record<string, number> = {};
+      for (const s of [...(span?.transitionStates ?? []), ...(span?.intermediates ?? [])]) control[controlKey(s, control)] = s.xTof;
+      return {
+        name: pathway.name,
+        cycle: pathway.cycle,
+        points: pathway.points.map((p) => ({ label: p.label, kind: p.kind, energy: en(p.energyJ), provenance: p.provenance })),
+        steps: steps.map((s) => ({
+          from: s.from.label, ts: s.ts?.label ?? null, to: s.to.label,
+          barrierForward: en(s.barrierForwardJ), barrierReverse: en(s.barrierReverseJ), reactionEnergy: en(s.reactionEnergyJ),
+          kForward: s.kForward, kReverse: s.kReverse, kForwardUnit: s.unitForward, kReverseUnit: s.unitReverse,
+          equilibriumConstant: s.equilibriumConstant, halfLifeSeconds: s.halfLifeSeconds, barrierless: s.barrierless, negativeBarrier: s.negativeBarrier,
+        })),
+        effectiveBarrier: eb && { value: e(eb.barrierJ), ts: eb.ts.label, intermediate: eb.intermediate.label, halfLifeSeconds: feasibility?.halfLifeSeconds ?? null, reading: feasibility ? `${feasibility.band} (${feasibility.basis})` : null },
+        reactionEnergy: known.length > 1 ? e(known.at(-1)!.energyJ! - known[0]!.energyJ!) : null,
+        energeticSpan: span && {
+          deltaE: e(span.deltaEJ), tdts: span.tdts.label, tdi: span.tdi.label, tof: span.tof, tofApprox: span.tofApprox,
+          apparentBarrier: en(span.apparentBarrierJ), reactionEnergy: e(span.reactionEnergyJ), degreeOfTofControl: control, convention: span.convention,
+        },
+      };
+    }),
+    comparisons: analysis.comparisons.map((c): ReportComparison => c.type === 'rate'
+      ? { type: 'rate', baseline: nameOf(c.baseline), candidate: nameOf(c.candidate), ddG: en(c.result?.ddgJ ?? null), rateRatio: c.result?.rateRatio ?? null, log10RateRatio: c.result?.log10RateRatio ?? null }
+      : {
+        type: 'selectivity', pathways: c.pathways.map(nameOf), assumption: c.result?.assumption ?? null,
+        products: (c.result?.channels ?? []).map((ch) => ({ pathway: ch.label, percent: ch.percent, effectiveTs: e(ch.effectiveTsJ) })),
+        ratio: c.result?.pair?.ratio ?? null, ddG: en(c.result?.pair?.ddgJ ?? null), er: c.result?.pair?.er ?? null, ee: c.enantiomeric ? c.result?.pair?.ee ?? null : null,
+      }),
+    checks: analysis.findings,
   };
 }

@@ -10,6 +10,10 @@ export function formatEnergy(value: number | null, decimals: number): string {
   return value > 0 && Number(fixed) !== 0 ? `+${fixed}` : fixed.replace(/^-(0\.?0*)$/, '$1');
 }
 
+function sci(value: number | null): string {
+  return value === null ? '—' : value.toPrecision(3);
+}
+
 function pad(text: string, width: number): string {
   return text.length >= width ? text : text + ' '.repeat(width - text.length);
 }
@@ -25,6 +29,21 @@ export function analysisText(report: AnalysisReport, decimals = 1): string {
     for (const p of pathway.points) {
       lines.push(`  ${pad(p.label, width)}${pad(p.kind === 'ts' ? 'TS' : 'min', 5)}${pad(formatEnergy(p.energy, decimals), 10)}${unit}   ${p.provenance.detail}`);
     }
+    for (const s of pathway.steps) {
+      const name = `${s.from} → ${s.ts ? `${s.ts} → ` : ''}${s.to}`;
+      lines.push(`  step ${name}: ΔG‡ ${formatEnergy(s.barrierForward, decimals)} / ${formatEnergy(s.barrierReverse, decimals)} back, Δ ${formatEnergy(s.reactionEnergy, decimals)} ${unit}; k ${sci(s.kForward)} ${s.kForwardUnit}, k₋ ${sci(s.kReverse)} ${s.kReverseUnit}${s.barrierless ? ' (barrierless)' : ''}`);
+    }
+    const eb = pathway.effectiveBarrier;
+    if (eb) lines.push(`  effective barrier ${formatEnergy(eb.value, decimals)} ${unit} (${eb.intermediate} → ${eb.ts})${eb.halfLifeSeconds === null ? '' : `, t½ ${sci(eb.halfLifeSeconds)} s: ${eb.reading?.split(' (')[0]} (common practice)`}`);
+    const span = pathway.energeticSpan;
+    if (span) {
+      lines.push(`  energetic span δE ${formatEnergy(span.deltaE, decimals)} ${unit}: TDTS ${span.tdts}, TDI ${span.tdi}; TOF ${sci(span.tof)} s⁻¹ (δE approximation ${sci(span.tofApprox)} s⁻¹)`);
+      lines.push(`  degree of TOF control: ${Object.entries(span.degreeOfTofControl).filter(([, x]) => x >= 0.01).map(([k, x]) => `${k} ${x.toFixed(2)}`).join(', ')}`);
+    }
+  }
+  for (const c of report.comparisons) {
+    if (c.type === 'rate') lines.push('', `${c.candidate} vs ${c.baseline}: ΔΔG‡ ${formatEnergy(c.ddG, decimals)} ${unit}, rate ratio ${sci(c.rateRatio)}`);
+    else lines.push('', `selectivity (${c.assumption === null ? 'not available' : 'Curtin–Hammett'}): ${c.products.map((p) => `${p.pathway} ${p.percent.toFixed(1)}%`).join(', ')}${c.ee === null ? '' : `, ee ${(100 * c.ee).toFixed(1)}%`}`);
   }
   if (report.checks.length > 0) {
     lines.push('', 'Findings');

@@ -8,9 +8,10 @@ import { checkMassBalance } from './massBalance.ts';
 import { checkSharedStates } from './sharedStates.ts';
 import { checkCycleClosure } from './cycleClosure.ts';
 import { checkHessMismatch } from './hessMismatch.ts';
+import { checkExothermCaution } from './exothermCaution.ts';
 
 const CHECKS: readonly ((input: CheckInput) => Finding[])[] = [
-  checkTransitionStates, checkDuplicateLabels, checkMassBalance, checkSharedStates, checkCycleClosure, checkHessMismatch,
+  checkTransitionStates, checkDuplicateLabels, checkMassBalance, checkSharedStates, checkCycleClosure, checkHessMismatch, checkExothermCaution,
 ];
 
 /** Runs every consistency check on resolved pathways. */

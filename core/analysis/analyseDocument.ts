@@ -1,0 +1,83 @@
+import type { Comparison, Document } from '../model/schema.ts';
+import { resolveProfile } from '../profile/resolve.ts';
+import type { Finding, ResolvedPathway, ResolvedProfile } from '../profile/types.ts';
+import { analyseSteps, type KineticStep } from '../kinetics/stepKinetics.ts';
+import { effectiveBarrier, type EffectiveBarrier } from '../kinetics/effectiveBarrier.ts';
+import { feasibilityReading, type FeasibilityReading } from '../kinetics/feasibilityReading.ts';
+import { energeticSpan, type EnergeticSpan } from '../kinetics/energeticSpan.ts';
+import { compareBarriers, competingPathways, type BarrierComparison, type CompetingPathways } from '../kinetics/compare.ts';
+import { molecularityFromCompositions } from './molecularity.ts';
+
+/** Kinetic reading of one pathway. */
+export interface PathwayAnalysis {
+  pathway: ResolvedPathway;
+  steps: KineticStep[];
+  effectiveBarrier: EffectiveBarrier | null;
+  /** Common-practice reading of the effective barrier (half-life band). */
+  feasibility: FeasibilityReading | null;
+  /** Energetic span model, for catalytic cycles only. */
+  energeticSpan: EnergeticSpan | null;
+}
+
+export type ComparisonAnalysis =
+  | { type: 'rate'; baseline: string; candidate: string; result: BarrierComparison | null }
+  | { type: 'selectivity'; pathways: string[]; enantiomeric: boolean; result: CompetingPathways | null };
+
+/** Everything Passline computes from a document, energies in J/mol. */
+export interface DocumentAnalysis {
+  profile: ResolvedProfile;
+  pathways: PathwayAnalysis[];
+  comparisons: ComparisonAnalysis[];
+  /** Resolution findings first, then analysis findings not already reported for the same point. */
+  findings: Finding[];
+}
+
+function mergeFindings(base: Finding[], extra: Finding[]): Finding[] {
+  const key = (f: Finding) => `${f.code}|${f.pathway ?? ''}|${f.point ?? ''}`;
+  const seen = new Set(base.map(key));
+  const merged = [...base];
+  for (const f of extra) if (!seen.has(key(f))) { seen.add(key(f)); merged.push(f); }
+  return merged;
+}
+
+function compare(c: Comparison, profile: ResolvedProfile, findings: Finding[]): ComparisonAnalysis {
+  const byId = (id: string) => profile.pathways.find((p) => p.id === id)!;
+  const t = profile.temperatureK;
+  if (c.type === 'rate') {
+    const { comparison, findings: f } = compareBarriers(byId(c.baseline), byId(c.candidate), t);
+    findings.push(...f);
+    return { type: 'rate', baseline: c.baseline, candidate: c.candidate, result: comparison };
+  }
+  const { result, findings: f } = competingPathways(c.pathways.map(byId), t);
+  findings.push(...f);
+  return { type: 'selectivity', pathways: c.pathways, enantiomeric: c.enantiomeric, result };
+}
+
+/**
+ * Resolves a document and analyses every pathway: steps with Eyring rates (molecularity
+ * from compositions where known), the effective barrier, the energetic span of cycles, and
+ * the comparisons the document asks for.
+ */
+export function analyseDocument(doc: Document): DocumentAnalysis {
+  const profile = resolveProfile(doc);
+  const extra: Finding[] = [];
+  const options = { temperatureK: profile.temperatureK, transmission: doc.settings.transmission };
+  const pathways = profile.pathways.map((pathway, i): PathwayAnalysis => {
+    const steps = analyseSteps(pathway, { ...options, molecularity: molecularityFromCompositions(doc.pathways[i]!) });
+    const effective = effectiveBarrier(pathway);
+    const span = pathway.cycle ? energeticSpan(pathway, options) : { span: null, findings: [] };
+    extra.push(...steps.findings, ...effective.findings, ...span.findings);
+    return {
+      pathway,
+      steps: steps.steps,
+      effectiveBarrier: effective.result,
+      feasibility: effective.result && profile.quantity === 'G' ? feasibilityReading(effective.result.barrierJ, profile.temperatureK) : null,
+      energeticSpan: span.span,
+    };
+  });
+  if (profile.quantity !== 'G') {
+    extra.push({ severity: 'warning', code: 'rates-need-g', message: `rate constants, half-lives and TOFs follow from Gibbs energies; this profile is in ${profile.quantity}, so they treat Δ‡${profile.quantity} as if it were Δ‡G` });
+  }
+  const comparisons = doc.comparisons.map((c) => compare(c, profile, extra));
+  return { profile, pathways, comparisons, findings: mergeFindings(profile.findings, extra) };
+}

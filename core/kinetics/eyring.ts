@@ -1,3 +1,4 @@
+import { assertTemperature } from '../thermo/assertTemperature.ts';
 import { kbtOverH, rtJoules } from '../units/index.ts';
 import type { Molecularity } from './types.ts';
 
@@ -9,10 +10,6 @@ const UNITS: Record<Molecularity, RateUnit> = { 1: 's⁻¹', 2: 'M⁻¹ s⁻¹',
 /** The unit of k for a step of molecularity m, (mol/L)^(1−m) s⁻¹. */
 export function rateUnit(molecularity: Molecularity): RateUnit {
   return UNITS[molecularity];
-}
-
-function assertTemperature(temperatureK: number): void {
-  if (!(temperatureK > 0) || !Number.isFinite(temperatureK)) throw new RangeError(`temperature must be positive and finite, got ${temperatureK}`);
 }
 
 /**
@@ -49,13 +46,9 @@ export function halfLifeFirstOrder(k: number): number {
   return Math.LN2 / k;
 }
 
-/** ln K = −ΔG/RT. */
-export function logEquilibriumConstant(reactionEnergyJ: number, temperatureK: number): number {
-  assertTemperature(temperatureK);
-  return -reactionEnergyJ / rtJoules(temperatureK);
-}
-
-/** Equilibrium constant K = exp(−ΔG/RT) (ΔG in J/mol, standard state 1 mol/L). */
-export function equilibriumConstant(reactionEnergyJ: number, temperatureK: number): number {
-  return Math.exp(logEquilibriumConstant(reactionEnergyJ, temperatureK));
-}
+// K and ln K live in core/thermo; re-exported as the same bindings so that the kinetics and
+// thermo indexes can be star-exported together without a name clash.
+/** Equilibrium constant K = exp(−ΔG/RT), ΔG in J/mol (core/thermo's implementation). */
+export { equilibriumConstant } from '../thermo/equilibrium.ts';
+/** ln K = −ΔG/RT, finite where K over- or underflows (core/thermo's `lnEquilibriumConstant`). */
+export { lnEquilibriumConstant as logEquilibriumConstant } from '../thermo/equilibrium.ts';

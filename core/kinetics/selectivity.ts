@@ -1,5 +1,5 @@
+import { ensembleFreeEnergyJ, ensemblePopulations } from '../thermo/ensemble.ts';
 import { rtJoules } from '../units/index.ts';
-import { logAddExp } from './logSumExp.ts';
 
 /**
  * Product ratio [P_A]/[P_B] = exp(ΔΔG‡/RT) under kinetic (Curtin–Hammett) control, with
@@ -24,19 +24,13 @@ export function eeFromDdg(ddgJ: number, temperatureK: number): number {
   return Math.tanh(ddgJ / (2 * rtJoules(temperatureK)));
 }
 
+// The Boltzmann sums are core/thermo's ensemble functions under their kinetics names.
 /**
  * Boltzmann-weighted ensemble energy G_eff = −RT ln Σ_i exp(−G_i/RT) in J/mol (≤ min G_i),
- * summed in log space. Throws for an empty list (programmer error).
+ * summed in log space; alias of core/thermo's `ensembleFreeEnergyJ`. Throws for an empty
+ * list or a non-finite energy (programmer error).
  */
-export function boltzmannEnergy(energiesJ: readonly number[], temperatureK: number): number {
-  if (energiesJ.length === 0) throw new RangeError('boltzmannEnergy needs at least one energy');
-  const rt = rtJoules(temperatureK);
-  return -rt * energiesJ.reduce((acc, g) => logAddExp(acc, -g / rt), -Infinity);
-}
+export const boltzmannEnergy = ensembleFreeEnergyJ;
 
-/** Boltzmann populations exp(−(G_i − G_eff)/RT) of an ensemble; they sum to 1. */
-export function boltzmannPopulations(energiesJ: readonly number[], temperatureK: number): number[] {
-  const rt = rtJoules(temperatureK);
-  const gEff = boltzmannEnergy(energiesJ, temperatureK);
-  return energiesJ.map((g) => Math.exp(-(g - gEff) / rt));
-}
+/** Boltzmann populations exp(−(G_i − G_eff)/RT) of an ensemble; they sum to 1 (core/thermo's `ensemblePopulations`). */
+export const boltzmannPopulations = ensemblePopulations;

@@ -1,8 +1,10 @@
 import { GAS_CONSTANT } from '../units/constants.ts';
 import { rtJoules } from '../units/thermal.ts';
+import { assertTemperature } from './assertTemperature.ts';
 
-/** ln K = −ΔrG°/RT (ΔrG° in J/mol). */
+/** ln K = −ΔrG°/RT (ΔrG° in J/mol, standard state 1 bar or 1 mol/L as the data are). Throws for T ≤ 0. */
 export function lnEquilibriumConstant(deltaGJ: number, temperatureK: number): number {
+  assertTemperature(temperatureK);
   return -deltaGJ / rtJoules(temperatureK);
 }
 

@@ -3,7 +3,7 @@ import { blockItems, labelBlock, type LabelBlock, type LabelStyle } from './labe
 import { barBox, type PlacedLevel } from './levels.ts';
 import type { PathwayPaint } from './pathwayPaint.ts';
 import { placeLabels, type LabelRequest } from './placeLabels.ts';
-import { overlaps } from './geometry.ts';
+import { boxIndex, type BoxIndex } from './boxIndex.ts';
 import { pathPieces } from './pathPieces.ts';
 import type { Box, PathItem, SceneItem } from './scene.ts';
 
@@ -27,12 +27,17 @@ export function labels(ctx: FigureContext, placed: readonly PlacedLevel[], paint
   };
   const order = [...placed].sort((a, b) => a.x - b.x || a.point.pathwayIndex - b.point.pathwayIndex || a.y - b.y);
   const groups: Group[] = [];
+  const byKey = new Map<string, Group[]>();
   for (const level of order) {
     const block = labelBlock(level.point.label, level.point.kind, level.point.energy!, style);
-    const twin = groups.find((g) => Math.abs(g.level.x - level.x) < 1e-6 && Math.abs(g.level.y - level.y) < 0.5 * ctx.strokeMm
-      && g.level.point.label === level.point.label && g.block.energyText === block.energyText);
+    const key = `${level.x.toFixed(4)}|${level.point.label}|${block.energyText}`;
+    const twin = byKey.get(key)?.find((g) => Math.abs(g.level.y - level.y) < 0.5 * ctx.strokeMm);
     if (twin) twin.shared = true;
-    else groups.push({ level, block, shared: false });
+    else {
+      const group = { level, block, shared: false };
+      groups.push(group);
+      byKey.set(key, [...(byKey.get(key) ?? []), group]);
+    }
   }
   const requests: LabelRequest[] = groups.map(({ level, block }) => ({
     x: level.x, y: level.y, halfWidth: level.halfWidth, w: block.w, h: block.h,
@@ -42,20 +47,22 @@ export function labels(ctx: FigureContext, placed: readonly PlacedLevel[], paint
   const placements = placeLabels(requests, { hard: placed.map((l) => barBox(l, ctx)), soft }, bounds, ctx.gapMm);
   const items: SceneItem[] = [];
   const boxes = placements.map((p) => p.box);
+  const owners = new Map<Box, number>(boxes.map((b, i) => [b, i]));
+  const index = boxIndex(Math.max(2, ...boxes.slice(0, 50).map((b) => b.w)));
+  boxes.forEach(index.add);
   groups.forEach((g, i) => {
     const { box, displaced } = placements[i]!;
     const colour = g.shared ? ctx.theme.ink : paints.get(g.level.point.pathwayIndex)!.colour;
     const line = displaced ? leader(ctx, g.level, box) : null;
     // A leader that would cut through another label confuses more than it helps.
-    if (line && !crossesOthers(line, boxes, i)) items.push(line);
+    if (line && !crossesOthers(line, index, owners, i)) items.push(line);
     items.push(...blockItems(g.block, box, ctx.theme.ink, colour, { pathway: g.level.point.pathwayId, point: g.level.point.pointId }));
   });
   return { items, boxes };
 }
 
-function crossesOthers(line: PathItem, boxes: readonly Box[], own: number): boolean {
-  const pieces = pathPieces(line.segments, 0, 16);
-  return boxes.some((b, j) => j !== own && pieces.some((p) => overlaps(p, b)));
+function crossesOthers(line: PathItem, index: BoxIndex, owners: ReadonlyMap<Box, number>, own: number): boolean {
+  return pathPieces(line.segments, 0, 16).some((p) => index.touching(p).some((b) => owners.get(b) !== own));
 }
 
 /** A thin line from the bar's centre to the nearest point of a label moved away from it. */

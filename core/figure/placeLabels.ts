@@ -55,6 +55,7 @@ export function placeLabels(requests: readonly LabelRequest[], obstacles: Obstac
 
 function cheapest(r: LabelRequest, bounds: Box, gap: number, step: number, free: (b: Box) => boolean, crossesSoft: (b: Box) => boolean): Placement | undefined {
   const other = r.prefer === 'above' ? 'below' : 'above';
+  step = Math.max(step, r.h / 3);
   const limit = Math.ceil((bounds.h + r.h) / step);
   // Extra costs in mm, as multiples of the label height (our tuning).
   const [otherSide, beside, soft] = [0.3 * r.h, 2 * r.h, r.h];

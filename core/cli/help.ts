@@ -26,6 +26,11 @@ Usage:
       (mol/L) vs time (s) and, for a cycle at steady state, the simulated TOF.
       Defaults: 3600 s, 50 log-spaced times, the first minimum at 1 mol/L.
 
+  passline render FILE -o OUT.svg|OUT.pdf|OUT.png [--width-mm W] [--preset single|double|slide]
+                 [--theme colour|greyscale|dark] [--dpi N] [--unit U] [--temperature K]
+      Draw the profile figure: SVG with editable text, vector PDF with the font
+      embedded, or PNG at N dots per inch (default 300).
+
   passline --help | --version
 
 Exit status: 0 success, 1 bad input (the message names the file, field or row), 2 bad usage.

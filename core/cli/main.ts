@@ -1,9 +1,11 @@
 import { parseArgs } from 'node:util';
-import { readFileSync, writeFileSync } from 'node:fs';
+import { closeSync, fsyncSync, openSync, readFileSync, renameSync, rmSync, writeSync } from 'node:fs';
+import { basename, dirname, join } from 'node:path';
 import { CliError, EXIT_OK, EXIT_USAGE, type CliIo } from './io.ts';
 import { runAnalyze } from './analyze.ts';
 import { runThermo } from './thermo.ts';
 import { runSimulate } from './simulate.ts';
+import { runRender } from './render.ts';
 import { HELP, VERSION } from './help.ts';
 
 /** The real terminal and filesystem. */
@@ -12,12 +14,31 @@ export const nodeIo: CliIo = {
   err: (text) => process.stderr.write(text),
   readFile: (path) => readFileSync(path, 'utf8'),
   readBytes: (path) => new Uint8Array(readFileSync(path)),
-  writeFile: (path, data) => writeFileSync(path, data),
+  writeFile: writeAtomically,
 };
 
-type Command = (positionals: string[], values: Record<string, string | boolean | string[] | undefined>, io: CliIo) => void | Promise<void>;
+/** Temp file in the same folder, flushed, then renamed over the target: never a torn output. */
+function writeAtomically(path: string, data: string | Uint8Array): void {
+  const temp = join(dirname(path), `.${basename(path)}.${process.pid}.tmp`);
+  const fd = openSync(temp, 'w');
+  try {
+    writeSync(fd, typeof data === 'string' ? Buffer.from(data, 'utf8') : data);
+    fsyncSync(fd);
+  } finally {
+    closeSync(fd);
+  }
+  try {
+    renameSync(temp, path);
+  } catch (error) {
+    rmSync(temp, { force: true });
+    throw error;
+  }
+}
 
-const COMMANDS: Record<string, { options: Record<string, { type: 'string' | 'boolean'; multiple?: boolean }>; run: Command; args: number }> = {
+type Command = (positionals: string[], values: Record<string, string | boolean | string[] | undefined>, io: CliIo) => void | Promise<void>;
+type OptionSpec = { type: 'string' | 'boolean'; multiple?: boolean; short?: string };
+
+const COMMANDS: Record<string, { options: Record<string, OptionSpec>; run: Command; args: number }> = {
   analyze: {
     options: { json: { type: 'boolean' }, unit: { type: 'string' }, temperature: { type: 'string' } },
     args: 1,
@@ -32,6 +53,11 @@ const COMMANDS: Record<string, { options: Record<string, { type: 'string' | 'boo
     options: { until: { type: 'string' }, points: { type: 'string' }, init: { type: 'string', multiple: true }, pathway: { type: 'string' }, temperature: { type: 'string' } },
     args: 1,
     run: ([file], v, io) => runSimulate(file!, { until: v.until as string | undefined, points: v.points as string | undefined, init: v.init as string[] | undefined, pathway: v.pathway as string | undefined, temperature: v.temperature as string | undefined }, io),
+  },
+  render: {
+    options: { output: { type: 'string', short: 'o' }, 'width-mm': { type: 'string' }, preset: { type: 'string' }, theme: { type: 'string' }, dpi: { type: 'string' }, unit: { type: 'string' }, temperature: { type: 'string' } },
+    args: 1,
+    run: ([file], v, io) => runRender(file!, { output: v.output as string | undefined, widthMm: v['width-mm'] as string | undefined, preset: v.preset as string | undefined, theme: v.theme as string | undefined, dpi: v.dpi as string | undefined, unit: v.unit as string | undefined, temperature: v.temperature as string | undefined }, io),
   },
 };
 

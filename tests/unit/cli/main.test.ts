@@ -131,3 +131,34 @@ describe('passline simulate', () => {
     expect((await run(['simulate', 'a.passline', '--pathway', 'nope'], { 'a.passline': cycleA })).err).toContain('no pathway "nope"');
   });
 });
+
+describe('passline render', () => {
+  const outputs = new Map<string, string | Uint8Array>();
+  const renderRun = async (argv: string[]) => {
+    let err = '';
+    const io: CliIo = {
+      out: () => {}, err: (t) => { err += t; },
+      readFile: (path) => readFileSync(new URL(path, `file://${root}`), 'utf8'),
+      readBytes: () => new Uint8Array(),
+      writeFile: (path, data) => { if (path.startsWith('/nope/')) throw Object.assign(new Error('no dir'), { code: 'ENOENT' }); outputs.set(path, data); },
+    };
+    return { code: await main(argv, io), err };
+  };
+
+  it('writes SVG text, PDF bytes and PNG bytes of the demo', async () => {
+    for (const out of ['fig.svg', 'fig.pdf', 'fig.png']) expect((await renderRun(['render', 'assets/demo/demo.passline', '-o', out, '--preset', 'single'])).code).toBe(0);
+    expect(String(outputs.get('fig.svg'))).toContain('<svg');
+    expect(String(outputs.get('fig.svg'))).toContain('TS-th');
+    expect(new TextDecoder('latin1').decode((outputs.get('fig.pdf') as Uint8Array).slice(0, 5))).toBe('%PDF-');
+    // PNG signature (ISO/IEC 15948 / W3C PNG spec): 89 50 4E 47 0D 0A 1A 0A.
+    expect([...(outputs.get('fig.png') as Uint8Array).slice(0, 8)]).toEqual([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
+  });
+
+  it('bad options are usage errors; an unwritable output is one line with exit 1', async () => {
+    expect(await renderRun(['render', 'assets/demo/demo.passline', '-o', 'fig.gif'])).toMatchObject({ code: 2 });
+    expect((await renderRun(['render', 'assets/demo/demo.passline', '-o', 'f.png', '--dpi', '5'])).err).toContain('--dpi: expected 36–2400, got 5');
+    expect((await renderRun(['render', 'assets/demo/demo.passline', '-o', 'f.svg', '--theme', 'neon'])).err).toContain('--theme: expected one of colour, greyscale, dark');
+    expect((await renderRun(['render', 'assets/demo/demo.passline'])).code).toBe(2);
+    expect(await renderRun(['render', 'assets/demo/demo.passline', '-o', '/nope/f.svg'])).toEqual({ code: 1, err: 'passline render: cannot write /nope/f.svg: ENOENT\n' });
+  });
+});

@@ -1,0 +1,50 @@
+import { extname } from 'node:path';
+import { resolveProfile } from '../profile/resolve.ts';
+import { renderFigure } from '../export/renderFigure.node.ts';
+import { checkRenderOptions, type FigureFormat } from '../export/renderFigure.ts';
+import type { Preset } from '../figure/presets.ts';
+import type { ThemeName } from '../figure/themes.ts';
+import { CliError, EXIT_USAGE, type CliIo } from './io.ts';
+import { loadInput } from './loadInput.ts';
+import { applySettingOptions, positiveOption } from './options.ts';
+import { readBundledFont } from './fontFile.ts';
+import { writeOutput } from './writeOutput.ts';
+
+export interface RenderCliOptions {
+  output?: string | undefined;
+  widthMm?: string | undefined;
+  preset?: string | undefined;
+  theme?: string | undefined;
+  dpi?: string | undefined;
+  unit?: string | undefined;
+  temperature?: string | undefined;
+}
+
+const PRESETS: readonly Preset[] = ['single', 'double', 'slide'];
+const THEMES: readonly ThemeName[] = ['colour', 'greyscale', 'dark'];
+const FORMATS: Record<string, FigureFormat> = { '.svg': 'svg', '.pdf': 'pdf', '.png': 'png' };
+
+function pick<T extends string>(name: string, value: string | undefined, allowed: readonly T[]): T | undefined {
+  if (value === undefined) return undefined;
+  if (!(allowed as readonly string[]).includes(value)) throw new CliError(`--${name}: expected one of ${allowed.join(', ')}, got "${value}"`, EXIT_USAGE);
+  return value as T;
+}
+
+/** `passline render FILE -o OUT.svg|pdf|png`: the figure, drawn from the same scene as the app. */
+export async function runRender(file: string, options: RenderCliOptions, io: CliIo): Promise<void> {
+  if (!options.output) throw new CliError('render: -o OUT.svg, OUT.pdf or OUT.png is required', EXIT_USAGE);
+  const format = FORMATS[extname(options.output).toLowerCase()];
+  if (!format) throw new CliError(`-o: the output must end in .svg, .pdf or .png, got "${options.output}"`, EXIT_USAGE);
+  const preset = pick('preset', options.preset, PRESETS);
+  const theme = pick('theme', options.theme, THEMES);
+  const widthMm = options.widthMm === undefined ? undefined : positiveOption('width-mm', options.widthMm, 0);
+  const dpi = options.dpi === undefined ? undefined : positiveOption('dpi', options.dpi, 0);
+  const problem = checkRenderOptions({ dpi, widthMm });
+  if (problem) throw new CliError(`--${problem.replace(/^width/, 'width-mm')}`, EXIT_USAGE);
+  const doc = applySettingOptions(loadInput(file, io), options);
+  const data = await renderFigure(resolveProfile(doc), doc, {
+    format, fontBytes: readBundledFont(),
+    ...(preset ? { preset } : {}), ...(theme ? { theme } : {}), ...(widthMm !== undefined ? { widthMm } : {}), ...(dpi !== undefined ? { dpi } : {}),
+  });
+  writeOutput(options.output, data, io);
+}

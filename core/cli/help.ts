@@ -31,6 +31,10 @@ Usage:
       Draw the profile figure: SVG with editable text, vector PDF with the font
       embedded, or PNG at N dots per inch (default 300).
 
+  passline scan FILE [--from K] [--to K] [--count N]
+      Rate constants, equilibrium constants, TOFs and product shares over a temperature
+      range (default 273.15–373.15 K, 11 values) as CSV; states how G(T) was obtained.
+
   passline --help | --version
 
 Exit status: 0 success, 1 bad input (the message names the file, field or row), 2 bad usage.

@@ -6,6 +6,7 @@ import { runAnalyze } from './analyze.ts';
 import { runThermo } from './thermo.ts';
 import { runSimulate } from './simulate.ts';
 import { runRender } from './render.ts';
+import { runScan } from './scan.ts';
 import { HELP, VERSION } from './help.ts';
 
 /** The real terminal and filesystem. */
@@ -58,6 +59,11 @@ const COMMANDS: Record<string, { options: Record<string, OptionSpec>; run: Comma
     options: { output: { type: 'string', short: 'o' }, 'width-mm': { type: 'string' }, preset: { type: 'string' }, theme: { type: 'string' }, dpi: { type: 'string' }, unit: { type: 'string' }, temperature: { type: 'string' } },
     args: 1,
     run: ([file], v, io) => runRender(file!, { output: v.output as string | undefined, widthMm: v['width-mm'] as string | undefined, preset: v.preset as string | undefined, theme: v.theme as string | undefined, dpi: v.dpi as string | undefined, unit: v.unit as string | undefined, temperature: v.temperature as string | undefined }, io),
+  },
+  scan: {
+    options: { from: { type: 'string' }, to: { type: 'string' }, count: { type: 'string' } },
+    args: 1,
+    run: ([file], v, io) => runScan(file!, { from: v.from as string | undefined, to: v.to as string | undefined, count: v.count as string | undefined }, io),
   },
 };
 

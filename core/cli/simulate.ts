@@ -1,6 +1,7 @@
 import { resolveProfile } from '../profile/resolve.ts';
 import { networkFromPathway } from '../kinetics/microkinetics/networkFromPathway.ts';
 import { simulate } from '../kinetics/microkinetics/simulate.ts';
+import { energeticSpan } from '../kinetics/energeticSpan.ts';
 import { CliError, EXIT_USAGE, type CliIo } from './io.ts';
 import { loadInput } from './loadInput.ts';
 import { applySettingOptions, positiveOption } from './options.ts';
@@ -59,4 +60,8 @@ export function runSimulate(file: string, options: SimulateCliOptions, io: CliIo
   io.out(`${lines.join('\n')}\n`);
   for (const f of [...built.findings, ...s.findings]) io.err(`${f.severity}: ${f.message}\n`);
   if (s.steadyStateTof !== undefined) io.err(`steady-state TOF (simulated): ${s.steadyStateTof.toPrecision(6)} s⁻¹\n`);
+  if (pathway.cycle) {
+    const { span } = energeticSpan(pathway, { temperatureK: doc.settings.temperatureK, transmission: doc.settings.transmission });
+    if (span) io.err(`TOF (energetic span model, exact): ${span.tof.toPrecision(6)} s⁻¹\n`);
+  }
 }

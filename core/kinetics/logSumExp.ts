@@ -1,24 +1,3 @@
-/** ln(e^a + e^b) without overflow; −Infinity stands for an empty sum. */
-export function logAddExp(a: number, b: number): number {
-  if (a === -Infinity) return b;
-  if (b === -Infinity) return a;
-  const hi = a > b ? a : b;
-  return hi + Math.log1p(Math.exp(-Math.abs(a - b)));
-}
-
-/** out[i] = ln Σ_{k<i} e^{x_k}; length n + 1, out[0] = −Infinity (exclusive prefix sums). */
-export function prefixLogSumExp(xs: ArrayLike<number>): Float64Array {
-  const out = new Float64Array(xs.length + 1);
-  out[0] = -Infinity;
-  for (let i = 0; i < xs.length; i++) out[i + 1] = logAddExp(out[i]!, xs[i]!);
-  return out;
-}
-
-/** out[i] = ln Σ_{k≥i} e^{x_k}; length n + 1, out[n] = −Infinity (suffix sums). */
-export function suffixLogSumExp(xs: ArrayLike<number>): Float64Array {
-  const n = xs.length;
-  const out = new Float64Array(n + 1);
-  out[n] = -Infinity;
-  for (let i = n - 1; i >= 0; i--) out[i] = logAddExp(out[i + 1]!, xs[i]!);
-  return out;
-}
+// The log-sum-exp helpers live beside the Boltzmann ensemble in core/thermo; the span sums use them from here.
+/** ln(e^a + e^b), prefix and suffix log-sums: core/thermo's log-sum-exp helpers. */
+export { logAddExp, prefixLogSumExp, suffixLogSumExp } from '../thermo/logSumExp.ts';

@@ -1,4 +1,5 @@
 import { rtJoules } from '../units/thermal.ts';
+import { logSumExp } from './logSumExp.ts';
 
 function checkEnergies(energiesJ: readonly number[]): void {
   if (energiesJ.length === 0) throw new RangeError('an ensemble needs at least one energy');
@@ -13,10 +14,7 @@ function checkEnergies(energiesJ: readonly number[]): void {
 export function ensembleFreeEnergyJ(energiesJ: readonly number[], temperatureK: number): number {
   checkEnergies(energiesJ);
   const rt = rtJoules(temperatureK);
-  const min = Math.min(...energiesJ);
-  let sum = 0;
-  for (const g of energiesJ) sum += Math.exp(-(g - min) / rt);
-  return min - rt * Math.log(sum);
+  return -rt * logSumExp(energiesJ.map((g) => -g / rt));
 }
 
 /** Boltzmann populations p_i = exp(−(G_i − G_eff)/RT); they sum to 1. */

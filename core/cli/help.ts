@@ -20,11 +20,13 @@ Usage:
       data (header: species,dfH [kJ/mol],S [J/(mol K)],dfG [kJ/mol]; any value column
       may be absent): ΔrH°, ΔrS°, ΔrG° both ways, K and the crossover temperature.
 
-  passline simulate FILE [--until SECONDS] [--points N] [--init LABEL=CONC ...] [--pathway NAME] [--temperature K]
+  passline simulate FILE [--species] [--until SECONDS] [--points N] [--init LABEL=CONC ...] [--pathway NAME] [--temperature K]
       Microkinetic simulation of one pathway (default: the first catalytic cycle) as a
       chain of its minima with Eyring rate constants; prints CSV of concentrations
       (mol/L) vs time (s) and, for a cycle at steady state, the simulated TOF.
       Defaults: 3600 s, 50 log-spaced times, the first minimum at 1 mol/L.
+      --species: simulate the document's species instead (states need compositions;
+      A + B ⇌ C steps are second order), starting from --init SPECIES=CONC.
 
   passline render FILE -o OUT.svg|OUT.pdf|OUT.png [--width-mm W] [--preset single|double|slide]
                  [--theme colour|greyscale|dark] [--dpi N] [--unit U] [--temperature K]

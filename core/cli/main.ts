@@ -51,9 +51,9 @@ const COMMANDS: Record<string, { options: Record<string, OptionSpec>; run: Comma
     run: ([file], v, io) => runThermo(file!, { json: v.json as boolean | undefined, reaction: v.reaction as string | undefined, temperature: v.temperature as string | undefined }, io),
   },
   simulate: {
-    options: { until: { type: 'string' }, points: { type: 'string' }, init: { type: 'string', multiple: true }, pathway: { type: 'string' }, temperature: { type: 'string' } },
+    options: { species: { type: 'boolean' }, until: { type: 'string' }, points: { type: 'string' }, init: { type: 'string', multiple: true }, pathway: { type: 'string' }, temperature: { type: 'string' } },
     args: 1,
-    run: ([file], v, io) => runSimulate(file!, { until: v.until as string | undefined, points: v.points as string | undefined, init: v.init as string[] | undefined, pathway: v.pathway as string | undefined, temperature: v.temperature as string | undefined }, io),
+    run: ([file], v, io) => runSimulate(file!, { species: v.species as boolean | undefined, until: v.until as string | undefined, points: v.points as string | undefined, init: v.init as string[] | undefined, pathway: v.pathway as string | undefined, temperature: v.temperature as string | undefined }, io),
   },
   render: {
     options: { output: { type: 'string', short: 'o' }, 'width-mm': { type: 'string' }, preset: { type: 'string' }, theme: { type: 'string' }, dpi: { type: 'string' }, unit: { type: 'string' }, temperature: { type: 'string' } },

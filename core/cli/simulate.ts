@@ -1,4 +1,9 @@
 import { resolveProfile } from '../profile/resolve.ts';
+import { analyseDocument } from '../analysis/analyseDocument.ts';
+import { speciesNetwork } from '../analysis/speciesNetwork.ts';
+import type { MassActionNetwork } from '../kinetics/microkinetics/network.ts';
+import type { Finding, ResolvedPathway } from '../profile/types.ts';
+import type { Document } from '../model/schema.ts';
 import { networkFromPathway } from '../kinetics/microkinetics/networkFromPathway.ts';
 import { simulate } from '../kinetics/microkinetics/simulate.ts';
 import { energeticSpan } from '../kinetics/energeticSpan.ts';
@@ -7,6 +12,7 @@ import { loadInput } from './loadInput.ts';
 import { applySettingOptions, positiveOption } from './options.ts';
 
 export interface SimulateCliOptions {
+  species?: boolean | undefined;
   until?: string | undefined;
   points?: string | undefined;
   init?: string[] | undefined;
@@ -35,22 +41,20 @@ export function runSimulate(file: string, options: SimulateCliOptions, io: CliIo
   const doc = applySettingOptions(loadInput(file, io), { temperature: options.temperature });
   const until = positiveOption('until', options.until, 3600);
   const points = Math.round(positiveOption('points', options.points, 50));
-  const profile = resolveProfile(doc);
-  const pathway = options.pathway === undefined
-    ? profile.pathways.find((p) => p.cycle) ?? profile.pathways[0]
-    : profile.pathways.find((p) => p.id === options.pathway || p.name === options.pathway);
-  if (!pathway) throw new CliError(options.pathway === undefined ? 'the document has no pathways' : `--pathway: no pathway "${options.pathway}" (have ${profile.pathways.map((p) => `"${p.name}"`).join(', ')})`, options.pathway === undefined ? 1 : EXIT_USAGE);
-  const built = networkFromPathway(pathway, { temperatureK: doc.settings.temperatureK, transmission: doc.settings.transmission });
-  if (!built.ok) throw new CliError(built.errors.map((e) => e.message).join('; '));
-  const { network } = built;
+  const chosen = options.species ? fromSpecies(doc) : fromPathway(doc, options.pathway);
+  const { network, findings, pathway } = chosen;
+  const what = pathway ? `a minimum of "${pathway.name}"` : 'a species of the document';
   const byLabel = readInitial(options.init ?? []);
   const initial: Record<string, number> = {};
   for (const [label, value] of byLabel) {
-    const index = network.labels.indexOf(label);
-    if (index < 0) throw new CliError(`--init: "${label}" is not a minimum of "${pathway.name}" (have ${network.labels.map((l) => `"${l}"`).join(', ')})`, EXIT_USAGE);
+    const index = network.labels.indexOf(label) >= 0 ? network.labels.indexOf(label) : network.species.indexOf(label);
+    if (index < 0) throw new CliError(`--init: "${label}" is not ${what} (have ${network.labels.map((l) => `"${l}"`).join(', ')})`, EXIT_USAGE);
     initial[network.species[index]!] = value;
   }
-  if (byLabel.size === 0) initial[network.species[0]!] = 1;
+  if (byLabel.size === 0) {
+    if (options.species) throw new CliError('--species: give starting concentrations with --init LABEL=CONC', EXIT_USAGE);
+    initial[network.species[0]!] = 1;
+  }
   const outcome = simulate(network, initial, { until, points });
   if (!outcome.ok) throw new CliError(outcome.errors.map((e) => `${e.path}: ${e.message}`).join('; '));
   const s = outcome.simulation;
@@ -58,10 +62,31 @@ export function runSimulate(file: string, options: SimulateCliOptions, io: CliIo
   const lines = [['time [s]', ...s.labels.map((l) => `${l} [mol/L]`), 'conversion'].map(quote).join(',')];
   s.times.forEach((t, k) => lines.push([t, ...s.concentrations[k]!, s.conversion[k]!].map((v) => v.toPrecision(8)).join(',')));
   io.out(`${lines.join('\n')}\n`);
-  for (const f of [...built.findings, ...s.findings]) io.err(`${f.severity}: ${f.message}\n`);
+  for (const f of [...findings, ...s.findings]) io.err(`${f.severity}: ${f.message}\n`);
   if (s.steadyStateTof !== undefined) io.err(`steady-state TOF (simulated): ${s.steadyStateTof.toPrecision(6)} s⁻¹\n`);
-  if (pathway.cycle) {
+  if (pathway?.cycle) {
     const { span } = energeticSpan(pathway, { temperatureK: doc.settings.temperatureK, transmission: doc.settings.transmission });
     if (span) io.err(`TOF (energetic span model, exact): ${span.tof.toPrecision(6)} s⁻¹\n`);
   }
+}
+
+interface ChosenNetwork { network: MassActionNetwork; findings: Finding[]; pathway: ResolvedPathway | null }
+
+/** The document's species as a mass-action network (states need compositions). */
+function fromSpecies(doc: Document): ChosenNetwork {
+  const built = speciesNetwork(doc, analyseDocument(doc));
+  if (!built.network) throw new CliError(built.findings.map((f) => f.message).join('; '));
+  return { network: built.network, findings: built.findings, pathway: null };
+}
+
+/** One pathway as a first-order chain of its minima. */
+function fromPathway(doc: Document, name: string | undefined): ChosenNetwork {
+  const profile = resolveProfile(doc);
+  const pathway = name === undefined
+    ? profile.pathways.find((p) => p.cycle) ?? profile.pathways[0]
+    : profile.pathways.find((p) => p.id === name || p.name === name);
+  if (!pathway) throw new CliError(name === undefined ? 'the document has no pathways' : `--pathway: no pathway "${name}" (have ${profile.pathways.map((p) => `"${p.name}"`).join(', ')})`, name === undefined ? 1 : EXIT_USAGE);
+  const built = networkFromPathway(pathway, { temperatureK: doc.settings.temperatureK, transmission: doc.settings.transmission });
+  if (!built.ok) throw new CliError(built.errors.map((e) => e.message).join('; '));
+  return { network: built.network, findings: built.findings, pathway };
 }

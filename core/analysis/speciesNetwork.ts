@@ -1,0 +1,57 @@
+import { pointComposition } from '../model/composition.ts';
+import type { Document, SpeciesTerm } from '../model/schema.ts';
+import type { Finding } from '../profile/types.ts';
+import { networkFromReactions, type ReactionInput } from '../kinetics/microkinetics/networkFromReactions.ts';
+import type { MassActionNetwork } from '../kinetics/microkinetics/network.ts';
+import type { DocumentAnalysis } from './analyseDocument.ts';
+
+type Counts = Record<string, number>;
+
+function counts(terms: readonly SpeciesTerm[]): Counts {
+  const out: Counts = {};
+  for (const t of terms) out[t.species] = (out[t.species] ?? 0) + t.count;
+  return out;
+}
+
+/** Molecules of `a` not matched in `b` (spectators cancel). */
+function minus(a: Counts, b: Counts): Counts {
+  const out: Counts = {};
+  for (const [s, n] of Object.entries(a)) if (n - (b[s] ?? 0) > 0) out[s] = n - (b[s] ?? 0);
+  return out;
+}
+
+const key = (c: Counts) => Object.entries(c).sort(([x], [y]) => (x < y ? -1 : 1)).map(([s, n]) => `${n}${s}`).join('+');
+
+/**
+ * Mass-action network of the document's species: every step between two minima whose
+ * compositions are known becomes an elementary reaction (spectator species cancel), with the
+ * Eyring constants of the analysis — molecularity from the compositions, reverse constants
+ * by detailed balance. The same reaction met in two pathways is kept once. Pathways without
+ * compositions are left out, with a finding.
+ */
+export function speciesNetwork(doc: Document, analysis: DocumentAnalysis): { network: MassActionNetwork | null; findings: Finding[] } {
+  const findings: Finding[] = [];
+  const reactions: ReactionInput[] = [];
+  const seen = new Set<string>();
+  analysis.pathways.forEach(({ steps }, i) => {
+    const pathway = doc.pathways[i]!;
+    const byId = new Map(pathway.points.map((p) => [p.id, pointComposition(p)] as const));
+    if (pathway.points.some((p) => p.kind === 'min' && !byId.get(p.id))) {
+      findings.push({ severity: 'info', code: 'network-needs-compositions', pathway: pathway.id, message: `"${pathway.name}" is left out of the species network: not every minimum has a composition` });
+      return;
+    }
+    for (const step of steps) {
+      const a = counts(byId.get(step.from.id)!), b = counts(byId.get(step.to.id)!);
+      const reactants = minus(a, b), products = minus(b, a);
+      const id = `${key(reactants)}>${key(products)}`;
+      if (Object.keys(reactants).length === 0 || seen.has(id) || step.kForward === null) continue;
+      seen.add(id);
+      reactions.push({ label: `${step.from.label} → ${step.to.label}`, reactants, products, kf: step.kForward, kr: step.kReverse ?? 0 });
+    }
+  });
+  if (reactions.length === 0) return { network: null, findings: [...findings, { severity: 'error', code: 'network-empty', message: 'no step with known compositions and energies to build a species network from' }] };
+  const built = networkFromReactions(reactions);
+  if (!built.ok) return { network: null, findings: [...findings, ...built.errors.map((e) => ({ severity: 'error' as const, code: 'network-invalid', message: `${e.path}: ${e.message}` }))] };
+  const labelOf = new Map(doc.species.map((s) => [s.id, s.label]));
+  return { network: { ...built.network, labels: built.network.species.map((s) => labelOf.get(s) ?? s) }, findings };
+}

@@ -5,6 +5,13 @@ import type { Box } from './scene.ts';
 export interface BoxIndex {
   add(box: Box): void;
   hits(box: Box, margin: number): boolean;
+  /** Like `hits`, for a box given by its numbers (no allocation on the hot path). */
+  hitsAt(x: number, y: number, w: number, h: number, margin: number): boolean;
+  /**
+   * How far a box at (x, y, w, h) must move along y (dir −1 up, +1 down) before it comes
+   * clear of every box it now touches (closer than `margin`): 0 when it touches none.
+   */
+  clearance(x: number, y: number, w: number, h: number, margin: number, dir: 1 | -1): number;
   /** The boxes that share interior area with `box`, each once, in the order added per cell. */
   touching(box: Box): Box[];
   /** Smallest top edge of all boxes added (Infinity when empty). */
@@ -16,15 +23,11 @@ export function boxIndex(cellMm: number): BoxIndex {
   const cells = new Map<number, Box[]>();
   // Numeric cell keys (no string building on the hot path); rows wrap far beyond any figure.
   const key = (i: number, j: number) => i * 1_000_003 + j;
+  const cell = (v: number) => Math.floor(v / cellMm);
   let top = Infinity;
-  const range = (b: Box, margin: number) => ({
-    i0: Math.floor((b.x - margin) / cellMm), i1: Math.floor((b.x + b.w + margin) / cellMm),
-    j0: Math.floor((b.y - margin) / cellMm), j1: Math.floor((b.y + b.h + margin) / cellMm),
-  });
-  return {
+  const index: BoxIndex = {
     add(box) {
-      const r = range(box, 0);
-      for (let i = r.i0; i <= r.i1; i++) for (let j = r.j0; j <= r.j1; j++) {
+      for (let i = cell(box.x); i <= cell(box.x + box.w); i++) for (let j = cell(box.y); j <= cell(box.y + box.h); j++) {
         const k = key(i, j);
         const list = cells.get(k);
         if (list) list.push(box);
@@ -32,22 +35,36 @@ export function boxIndex(cellMm: number): BoxIndex {
       }
       top = Math.min(top, box.y);
     },
-    hits(box, margin) {
-      const r = range(box, margin);
-      for (let i = r.i0; i <= r.i1; i++) for (let j = r.j0; j <= r.j1; j++) {
+    hits: (b, margin) => index.hitsAt(b.x, b.y, b.w, b.h, margin),
+    hitsAt(x, y, w, h, margin) {
+      for (let i = cell(x - margin); i <= cell(x + w + margin); i++) for (let j = cell(y - margin); j <= cell(y + h + margin); j++) {
         const list = cells.get(key(i, j));
-        if (list?.some((b) => overlaps(box, b, margin))) return true;
+        if (!list) continue;
+        for (const b of list) if (x < b.x + b.w + margin && b.x < x + w + margin && y < b.y + b.h + margin && b.y < y + h + margin) return true;
       }
       return false;
     },
+    clearance(x, y, w, h, margin, dir) {
+      let need = 0;
+      for (let i = cell(x - margin); i <= cell(x + w + margin); i++) for (let j = cell(y - margin); j <= cell(y + h + margin); j++) {
+        const list = cells.get(key(i, j));
+        if (!list) continue;
+        for (const b of list) {
+          if (!(x < b.x + b.w + margin && b.x < x + w + margin && y < b.y + b.h + margin && b.y < y + h + margin)) continue;
+          const move = dir > 0 ? b.y + b.h + margin - y : y + h + margin - b.y;
+          if (move > need) need = move;
+        }
+      }
+      return need;
+    },
     touching(box) {
       const found = new Set<Box>();
-      const r = range(box, 0);
-      for (let i = r.i0; i <= r.i1; i++) for (let j = r.j0; j <= r.j1; j++) {
+      for (let i = cell(box.x); i <= cell(box.x + box.w); i++) for (let j = cell(box.y); j <= cell(box.y + box.h); j++) {
         for (const b of cells.get(key(i, j)) ?? []) if (overlaps(box, b)) found.add(b);
       }
       return [...found];
     },
     top: () => top,
   };
+  return index;
 }

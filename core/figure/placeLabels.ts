@@ -1,8 +1,7 @@
-import { boxIndex } from './boxIndex.ts';
-import { inside } from './geometry.ts';
+import { boxIndex, type BoxIndex } from './boxIndex.ts';
 import type { Box } from './scene.ts';
 
-/** A label to place next to its level bar. */
+/** A label to place next to its level bar (or beside an annotation's arrow). */
 export interface LabelRequest {
   /** Bar centre and half width, mm. */
   x: number;
@@ -10,7 +9,8 @@ export interface LabelRequest {
   halfWidth: number;
   w: number;
   h: number;
-  prefer: 'above' | 'below';
+  /** Where the label would rather sit: above or below the bar, or beside it (right first). */
+  prefer: 'above' | 'below' | 'beside';
   /** A user offset from the preferred spot: the label goes exactly there. */
   fixed?: { dx: number; dy: number };
 }
@@ -29,12 +29,12 @@ export interface Obstacles {
 
 /**
  * Greedy, deterministic placement: labels are taken in the order given; each looks at
- * spots at growing distance from its bar — above and below, then right and left of it —
- * and takes the cheapest whose box (grown by `gap`) touches no bar and no label placed
- * before it and lies inside `bounds`. Cost grows with the distance; the non-preferred
- * side, a spot beside the bar and crossing a soft obstacle (a connector) cost extra.
- * If nothing fits inside, the label goes just above everything (outside the bounds but
- * still clear), so boxes never overlap.
+ * spots at growing distance from its bar — above and below, then right and left of it
+ * (for `beside`, right and left first) — and takes the cheapest whose box (grown by
+ * `gap`) touches no bar and no label placed before it and lies inside `bounds`. Cost grows
+ * with the distance; the non-preferred side, a spot off the preferred side and crossing a
+ * soft obstacle (a connector) cost extra. If nothing fits inside, the label goes just
+ * above everything (outside the bounds but still clear), so boxes never overlap.
  */
 export function placeLabels(requests: readonly LabelRequest[], obstacles: Obstacles, bounds: Box, gap: number, step = 0.5): Placement[] {
   const cell = Math.max(2, ...requests.slice(0, 50).map((r) => r.w));
@@ -43,53 +43,96 @@ export function placeLabels(requests: readonly LabelRequest[], obstacles: Obstac
   obstacles.hard.forEach(hard.add);
   obstacles.soft.forEach(soft.add);
   return requests.map((r) => {
-    const home = spot(r, r.prefer, 0, gap);
+    const home = r.prefer === 'beside' ? side(r, 'right', gap) : spot(r, r.prefer, gap);
     const placement: Placement = r.fixed
       ? { box: { ...home, x: home.x + r.fixed.dx, y: home.y + r.fixed.dy }, displaced: false }
-      : cheapest(r, bounds, gap, step, (b) => !hard.hits(b, gap), (b) => soft.hits(b, 0))
+      : cheapest(r, bounds, gap, step, hard, soft)
         ?? { box: { ...home, y: Math.min(hard.top(), bounds.y) - 2 * gap - r.h }, displaced: true };
     hard.add(placement.box);
     return placement;
   });
 }
 
-function cheapest(r: LabelRequest, bounds: Box, gap: number, step: number, free: (b: Box) => boolean, crossesSoft: (b: Box) => boolean): Placement | undefined {
-  const other = r.prefer === 'above' ? 'below' : 'above';
+/** One line of candidate spots: fixed x, y moving from y0 in direction dir as the distance grows. */
+interface Stream {
+  x: number;
+  y0: number;
+  dir: 1 | -1;
+  extra: number;
+  /** First step index worth looking at again (every spot before it is known blocked). */
+  next: number;
+  dead: boolean;
+}
+
+function cheapest(r: LabelRequest, bounds: Box, gap: number, step: number, hard: BoxIndex, soft: BoxIndex): Placement | undefined {
   step = Math.max(step, r.h / 3);
   const limit = Math.ceil((bounds.h + r.h) / step);
-  // Extra costs in mm, as multiples of the label height (our tuning).
-  const [otherSide, beside, soft] = [0.3 * r.h, 2 * r.h, r.h];
+  const streams = candidateStreams(r, gap).map(([b, dir, extra]): Stream => ({
+    // Slide a label sideways into the bounds rather than lose a spot next to its bar.
+    x: Math.min(Math.max(b.x, bounds.x), bounds.x + bounds.w - r.w), y0: b.y, dir, extra, next: 0, dead: false,
+  }));
+  const softCost = r.h;
+  const [top, bottom] = [bounds.y, bounds.y + bounds.h];
   let best: { placement: Placement; cost: number } | undefined;
-  for (let i = 0; i <= limit; i++) {
+  let i = 0;
+  while (i <= limit) {
     const d = i * step;
     if (best && d >= best.cost) break;
-    const far = d > r.h;
-    const candidates: [Box, number][] = [
-      [spot(r, r.prefer, d, gap), d],
-      [spot(r, other, d, gap), d + otherSide],
-      [side(r, 'right', d, gap), d + beside],
-      [side(r, 'right', -d, gap), d + beside],
-      [side(r, 'left', d, gap), d + beside],
-      [side(r, 'left', -d, gap), d + beside],
-    ];
-    for (const [raw, base] of candidates) {
-      if (best && base >= best.cost) continue;
-      // Slide a label sideways into the bounds rather than lose a spot next to its bar.
-      const box = { ...raw, x: Math.min(Math.max(raw.x, bounds.x), bounds.x + bounds.w - raw.w) };
-      if (!inside(box, bounds) || !free(box)) continue;
-      const cost = base + (crossesSoft(box) ? soft : 0);
-      if (!best || cost < best.cost) best = { placement: { box, displaced: far }, cost };
+    let soonest = Infinity;
+    for (const s of streams) {
+      if (s.dead) continue;
+      if (s.next > i) {
+        soonest = Math.min(soonest, s.next);
+        continue;
+      }
+      const base = d + s.extra;
+      // Costs only grow along a stream: once it cannot win, it never will.
+      if (best && base >= best.cost) { s.dead = true; continue; }
+      const y = s.y0 + s.dir * d;
+      const outAhead = s.dir < 0 ? y < top : y + r.h > bottom;
+      if (s.x < bounds.x || s.x + r.w > bounds.x + bounds.w || outAhead) { s.dead = true; continue; }
+      s.next = i + 1;
+      soonest = Math.min(soonest, s.next);
+      if (y < top || y + r.h > bottom) continue;
+      const move = hard.clearance(s.x, y, r.w, r.h, gap, s.dir);
+      if (move > 0) {
+        // Every spot closer than `move` along this line is blocked by the same box: skip them.
+        s.next = Math.max(i + 1, Math.ceil((d + move) / step - 1e-9));
+        soonest = Math.min(soonest, s.next);
+        continue;
+      }
+      const cost = base + (soft.hitsAt(s.x, y, r.w, r.h, 0) ? softCost : 0);
+      if (!best || cost < best.cost) best = { placement: { box: { x: s.x, y, w: r.w, h: r.h }, displaced: d > r.h }, cost };
     }
+    if (soonest === Infinity) break;
+    i = Math.max(i + 1, soonest);
   }
   return best?.placement;
 }
 
-function spot(r: LabelRequest, where: 'above' | 'below', d: number, gap: number): Box {
-  const y = where === 'above' ? r.y - 2 * gap - r.h - d : r.y + 2 * gap + d;
+/** The candidate lines in order of preference, with their extra cost (multiples of the label height, our tuning). */
+function candidateStreams(r: LabelRequest, gap: number): [Box, 1 | -1, number][] {
+  const [otherSide, beside] = [0.3 * r.h, 2 * r.h];
+  const right = side(r, 'right', gap);
+  const left = side(r, 'left', gap);
+  if (r.prefer === 'beside') {
+    return [[right, 1, 0], [right, -1, 0], [left, 1, otherSide], [left, -1, otherSide], [spot(r, 'above', gap), -1, beside], [spot(r, 'below', gap), 1, beside]];
+  }
+  const other = r.prefer === 'above' ? 'below' : 'above';
+  const dirOf = (where: 'above' | 'below') => (where === 'above' ? -1 : 1);
+  return [
+    [spot(r, r.prefer, gap), dirOf(r.prefer), 0],
+    [spot(r, other, gap), dirOf(other), otherSide],
+    [right, 1, beside], [right, -1, beside], [left, 1, beside], [left, -1, beside],
+  ];
+}
+
+function spot(r: LabelRequest, where: 'above' | 'below', gap: number): Box {
+  const y = where === 'above' ? r.y - 2 * gap - r.h : r.y + 2 * gap;
   return { x: r.x - r.w / 2, y, w: r.w, h: r.h };
 }
 
-function side(r: LabelRequest, where: 'left' | 'right', d: number, gap: number): Box {
+function side(r: LabelRequest, where: 'left' | 'right', gap: number): Box {
   const x = where === 'right' ? r.x + r.halfWidth + 2 * gap : r.x - r.halfWidth - 2 * gap - r.w;
-  return { x, y: r.y - r.h / 2 + d, w: r.w, h: r.h };
+  return { x, y: r.y - r.h / 2, w: r.w, h: r.h };
 }

@@ -53,6 +53,21 @@ function compare(c: Comparison, profile: ResolvedProfile, findings: Finding[]): 
   return { type: 'selectivity', pathways: c.pathways, enantiomeric: c.enantiomeric, result };
 }
 
+/** Bimolecular rate constants above ~10¹⁰ L mol⁻¹ s⁻¹ exceed diffusion control in common solvents (common practice, REFERENCE.md §10). */
+const DIFFUSION_LIMIT = 1e10;
+
+function fasterThanDiffusion({ pathway, steps }: PathwayAnalysis): Finding[] {
+  const out: Finding[] = [];
+  for (const s of steps) {
+    for (const [k, m, dir] of [[s.kForward, s.molecularityForward, 'forward'], [s.kReverse, s.molecularityReverse, 'reverse']] as const) {
+      if (k !== null && m >= 2 && k > DIFFUSION_LIMIT) {
+        out.push({ severity: 'info', code: 'faster-than-diffusion', pathway: pathway.id, point: (s.ts ?? s.to).id, message: `the ${dir} rate constant of ${s.from.label} → ${s.to.label} is ${k.toPrecision(3)} M⁻¹ s⁻¹, above the diffusion limit (~10¹⁰ M⁻¹ s⁻¹, common practice); the step is diffusion-controlled in practice` });
+      }
+    }
+  }
+  return out;
+}
+
 /**
  * Resolves a document and analyses every pathway: steps with Eyring rates (molecularity
  * from compositions where known), the effective barrier, the energetic span of cycles, and
@@ -75,6 +90,7 @@ export function analyseDocument(doc: Document): DocumentAnalysis {
       energeticSpan: span.span,
     };
   });
+  for (const p of pathways) extra.push(...fasterThanDiffusion(p));
   if (profile.quantity !== 'G') {
     extra.push({ severity: 'warning', code: 'rates-need-g', message: `rate constants, half-lives and TOFs follow from Gibbs energies; this profile is in ${profile.quantity}, so they treat Δ‡${profile.quantity} as if it were Δ‡G` });
   }

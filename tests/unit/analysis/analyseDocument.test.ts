@@ -85,4 +85,13 @@ describe('analyseDocument', () => {
     expect(findings.map((f) => f.code).filter((c) => c === 'ts-below-neighbour')).toHaveLength(1);
     expect(findings.map((f) => f.code)).toContain('rates-need-g');
   });
+
+  it('the species demo: mass-balanced, standard-state corrected, bimolecular steps flagged as diffusion-controlled', () => {
+    const parsed = parseDocument(readFileSync(new URL('../../../assets/demo/species-demo.passline', import.meta.url), 'utf8'));
+    if (!parsed.ok) throw new Error('species demo must load');
+    const analysis = analyseDocument(parsed.doc);
+    expect(analysis.findings.map((f) => f.code)).toEqual(['faster-than-diffusion', 'faster-than-diffusion']);
+    const [bind] = analysis.pathways[0]!.steps;
+    expect(bind).toMatchObject({ barrierless: true, molecularityForward: 2, unitForward: 'M⁻¹ s⁻¹' });
+  });
 });

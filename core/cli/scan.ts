@@ -1,5 +1,7 @@
 import { scanDocument } from '../analysis/scanDocument.ts';
+import { tableToCsv } from '../export/tableToCsv.ts';
 import { CliError, EXIT_USAGE, type CliIo } from './io.ts';
+import { significant } from './significant.ts';
 import { loadInput } from './loadInput.ts';
 import { positiveOption } from './options.ts';
 
@@ -13,9 +15,9 @@ export function runScan(file: string, options: ScanCliOptions, io: CliIo): void 
   const count = positiveOption('count', options.count, 11);
   if (!Number.isInteger(count) || count > 1000) throw new CliError(`--count: expected a whole number from 1 to 1000, got "${options.count}"`, EXIT_USAGE);
   const scan = scanDocument(doc, from, to, count);
-  const quote = (text: string) => (/[",\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text);
-  const header = ['T [K]', ...scan.series.map((s) => `${s.name} [${s.unit}]`)].map(quote).join(',');
-  const rows = scan.temperaturesK.map((t, k) => [t.toPrecision(6), ...scan.series.map((s) => (s.values[k] === null ? '' : s.values[k]!.toPrecision(6)))].join(','));
-  io.out(`${[header, ...rows].join('\n')}\n`);
+  io.out(tableToCsv({
+    columns: ['T [K]', ...scan.series.map((s) => `${s.name} [${s.unit}]`)],
+    rows: scan.temperaturesK.map((t, k) => [significant(t), ...scan.series.map((s) => (s.values[k] === null ? null : significant(s.values[k]!)))]),
+  }));
   for (const a of scan.approximations) io.err(`approximation: ${a}\n`);
 }

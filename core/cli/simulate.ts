@@ -7,7 +7,9 @@ import type { Document } from '../model/schema.ts';
 import { networkFromPathway } from '../kinetics/microkinetics/networkFromPathway.ts';
 import { simulate } from '../kinetics/microkinetics/simulate.ts';
 import { energeticSpan } from '../kinetics/energeticSpan.ts';
+import { tableToCsv } from '../export/tableToCsv.ts';
 import { CliError, EXIT_USAGE, type CliIo } from './io.ts';
+import { significant } from './significant.ts';
 import { loadInput } from './loadInput.ts';
 import { applySettingOptions, positiveOption } from './options.ts';
 
@@ -58,10 +60,10 @@ export function runSimulate(file: string, options: SimulateCliOptions, io: CliIo
   const outcome = simulate(network, initial, { until, points });
   if (!outcome.ok) throw new CliError(outcome.errors.map((e) => `${e.path}: ${e.message}`).join('; '));
   const s = outcome.simulation;
-  const quote = (text: string) => (/[",\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text);
-  const lines = [['time [s]', ...s.labels.map((l) => `${l} [mol/L]`), 'conversion'].map(quote).join(',')];
-  s.times.forEach((t, k) => lines.push([t, ...s.concentrations[k]!, s.conversion[k]!].map((v) => v.toPrecision(8)).join(',')));
-  io.out(`${lines.join('\n')}\n`);
+  io.out(tableToCsv({
+    columns: ['time [s]', ...s.labels.map((l) => `${l} [mol/L]`), 'conversion'],
+    rows: s.times.map((t, k) => [t, ...s.concentrations[k]!, s.conversion[k]!].map(significant)),
+  }));
   for (const f of [...findings, ...s.findings]) io.err(`${f.severity}: ${f.message}\n`);
   if (s.steadyStateTof !== undefined) io.err(`steady-state TOF (simulated): ${s.steadyStateTof.toPrecision(6)} s⁻¹\n`);
   if (pathway?.cycle) {

@@ -1,4 +1,5 @@
 import type { Finding, ResolvedPathway, ResolvedPoint } from '../profile/types.ts';
+import { stepShapes } from './stepShapes.ts';
 
 /** One state of a catalytic cycle as the energetic span model sees it. */
 export interface CycleState {
@@ -40,23 +41,13 @@ export function cycleStates(pathway: ResolvedPathway): { states: CycleStates | n
   }
   if (first.kind === 'ts') return fail('cycle-starts-with-ts', `the first point "${first.label}" must be the starting intermediate I₁, not a TS`, first.id);
   if (last.kind === 'ts') return fail('cycle-not-closed', `the last point "${last.label}" must be the regenerated first state I₁′ (its energy gives ΔG_r), not a TS`, last.id);
-  const intermediates: CycleState[] = [];
-  const transitionStates: CycleState[] = [];
+  const { steps, problems } = stepShapes(pathway);
+  // With a minimum at both ends, two TSs in a row are the only way a step can fail.
+  const [pair] = problems;
+  if (pair?.kind === 'consecutive-ts') return fail('consecutive-ts', `TS "${pair.ts.label}" and TS "${pair.extraTs.label}" follow each other with no intermediate between`, pair.extraTs.id);
   const findings: Finding[] = [];
-  let from = first;
-  let ts: ResolvedPoint | null = null;
-  for (let k = 1; k < pts.length; k++) {
-    const p = pts[k]!;
-    if (p.kind === 'ts') {
-      if (ts !== null) return fail('consecutive-ts', `TS "${ts.label}" and TS "${p.label}" follow each other with no intermediate between`, p.id);
-      ts = p;
-      continue;
-    }
-    intermediates.push(state(from, 'given'));
-    transitionStates.push(stepTop(pathway, from, ts, p, findings));
-    from = p;
-    ts = null;
-  }
+  const intermediates = steps.map((step) => state(step.from, 'given'));
+  const transitionStates = steps.map((step) => stepTop(pathway, step.from, step.ts, step.to, findings));
   return { states: { intermediates, transitionStates, reactionEnergyJ: (last.energyJ as number) - (first.energyJ as number) }, findings };
 }
 

@@ -1,5 +1,4 @@
-import { rtJoules } from '../units/index.ts';
-import { boltzmannEnergy, boltzmannPopulations, eeFromDdg } from './selectivity.ts';
+import { boltzmannEnergy, boltzmannPopulations, eeFromDdg, ratioFromDdg } from './selectivity.ts';
 
 /** One product channel: the TS energies (J/mol, common reference) that lead to it. */
 export interface SelectivityChannel {
@@ -46,7 +45,7 @@ export function productDistribution(channels: readonly SelectivityChannel[], tem
   const [a, b] = shares;
   if (a === undefined || b === undefined) return { channels: shares, pair: null };
   const ddgJ = b.effectiveTsJ - a.effectiveTsJ;
-  const ratio = Math.exp(ddgJ / rtJoules(temperatureK));
+  const ratio = ratioFromDdg(ddgJ, temperatureK);
   return {
     channels: shares,
     pair: { ratio, ddgJ, er: Math.max(ratio, 1 / ratio), ee: Math.abs(eeFromDdg(ddgJ, temperatureK)), major: ddgJ >= 0 ? a.id : b.id },

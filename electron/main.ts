@@ -1,46 +1,151 @@
-import { app, BrowserWindow, ipcMain } from 'electron';
+import { app, BrowserWindow, dialog, ipcMain, Menu, screen } from 'electron';
 import { dirname, join } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
+import { HOST_COMMAND_CHANNEL } from '../ui/host/hostApi.ts';
+import type { HostCommand } from '../ui/host/hostCommand.ts';
+import { aboutMessage } from './aboutBox.ts';
+import { documentPathsFromArgv } from './argvFiles.ts';
+import { CloseGuard } from './closeGuard.ts';
+import { CommandSender } from './commandSender.ts';
 import { createMainWindow } from './createMainWindow.ts';
 import { createDesktopHost } from './desktopHost.ts';
 import { hardenContents } from './hardenContents.ts';
+import { buildMenuTemplate } from './menuTemplate.ts';
 import { nativeDialogs } from './nativeDialogs.ts';
 import { PathGrants } from './pathGrants.ts';
+import { RecentStore } from './recentStore.ts';
+import { RecoveryStore } from './recoveryStore.ts';
 import { registerHostIpc } from './registerHostIpc.ts';
 import { isAppSender } from './senderCheck.ts';
+import { acceptSystemPath } from './systemPath.ts';
+import { placeWindow } from './windowState.ts';
+import { loadWindowState, trackWindowState } from './windowStateStore.ts';
 
 // Bundled to electron/dist/main.js; the renderer build sits in dist/renderer at the top.
 const here = dirname(fileURLToPath(import.meta.url));
 const files = { preload: join(here, 'preload.cjs'), rendererIndex: join(here, '..', '..', 'dist', 'renderer', 'index.html') };
 const appUrl = pathToFileURL(files.rendererIndex).href;
 const log = (message: string) => console.warn(`[passline] ${message}`);
+// `electron .` in development puts the app folder before the user's arguments.
+const launcherArgs = app.isPackaged ? 1 : 2;
 
 let mainWindow: BrowserWindow | null = null;
+let quitting = false;
 const appWindowIds = new Set<number>();
+const commands = new CommandSender();
+const grants = new PathGrants();
+const dialogs = nativeDialogs(() => mainWindow);
+const recent = new RecentStore(app.getPath('userData'));
+const recovery = new RecoveryStore(join(app.getPath('userData'), 'recovery'));
+let closeGuard: CloseGuard | null = null;
 
-function openWindow(): void {
-  const win = createMainWindow(files);
+/** A document named by the system: granted for opening, then offered to the renderer. */
+function openFromSystem(path: unknown): void {
+  const accepted = acceptSystemPath(path);
+  if (!accepted) return log('ignored a file from the system that is not a .passline document');
+  grants.grant(accepted);
+  send({ kind: 'openKnown', path: accepted });
+}
+
+function send(command: HostCommand): void {
+  if (app.isReady() && !mainWindow) void openWindow();
+  commands.send(command);
+}
+
+function setMenu(): void {
+  Menu.setApplicationMenu(Menu.buildFromTemplate(buildMenuTemplate({
+    platform: process.platform,
+    appName: app.name,
+    recent: recent.list(),
+    actions: {
+      command: send,
+      openRecent: (path) => send({ kind: 'openKnown', path }),
+      clearRecent: () => void recent.clear().then(setMenu, (error: unknown) => log(String(error))),
+      about: () => void dialog.showMessageBox(aboutMessage('Passline', app.getVersion(), process.versions)),
+    },
+  })));
+}
+
+async function openWindow(): Promise<void> {
+  const saved = await loadWindowState(app.getPath('userData'));
+  const win = createMainWindow(files, placeWindow(saved, screen.getAllDisplays().map((d) => d.workArea)));
   const id = win.webContents.id;
   appWindowIds.add(id);
   mainWindow = win;
+  commands.attach(win.webContents);
+  trackWindowState(win, app.getPath('userData'), log);
+  const guard = new CloseGuard({
+    askRenderer: () => win.webContents.send(HOST_COMMAND_CHANNEL, { kind: 'closeRequested' } satisfies HostCommand),
+    askUser: (name) => dialogs.askClose(name),
+    requestSave: () => win.webContents.send(HOST_COMMAND_CHANNEL, { kind: 'saveThenClose' } satisfies HostCommand),
+    discard: () => recovery.clear(),
+    close: () => win.close(),
+    timers: { set: (callback, ms) => setTimeout(callback, ms), clear: (handle) => clearTimeout(handle as NodeJS.Timeout) },
+  });
+  closeGuard = guard;
+  win.on('close', (event) => {
+    if (!guard.onClose()) event.preventDefault();
+  });
   win.on('closed', () => {
     appWindowIds.delete(id);
+    commands.detach(win.webContents);
     if (mainWindow === win) mainWindow = null;
+    if (closeGuard === guard) closeGuard = null;
+    if (quitting) app.quit();
   });
 }
 
-app.enableSandbox();
-app.on('web-contents-created', (_event, contents) => hardenContents(contents, log));
-
-void app.whenReady().then(() => {
-  const host = createDesktopHost(nativeDialogs(() => mainWindow), new PathGrants());
-  registerHostIpc(ipcMain, host, (event) => isAppSender(event, appWindowIds, appUrl), log);
-  openWindow();
-  app.on('activate', () => {
-    if (BrowserWindow.getAllWindows().length === 0) openWindow();
+if (!app.requestSingleInstanceLock()) {
+  // Another Passline is running: it received our command line through 'second-instance'.
+  app.quit();
+} else {
+  app.enableSandbox();
+  app.on('web-contents-created', (_event, contents) => hardenContents(contents, log));
+  app.on('second-instance', (_event, argv, workingDirectory) => {
+    for (const path of documentPathsFromArgv(argv, launcherArgs, workingDirectory)) openFromSystem(path);
+    if (mainWindow) {
+      if (mainWindow.isMinimized()) mainWindow.restore();
+      mainWindow.focus();
+    }
   });
-});
+  // macOS hands over double-clicked documents this way, possibly before 'ready'.
+  app.on('open-file', (event, path) => {
+    event.preventDefault();
+    openFromSystem(path);
+  });
+  for (const path of documentPathsFromArgv(process.argv, launcherArgs, process.cwd())) openFromSystem(path);
 
-app.on('window-all-closed', () => {
-  if (process.platform !== 'darwin') app.quit();
-});
+  void app.whenReady().then(async () => {
+    await Promise.all([recent.load(), recovery.begin()]);
+    const host = createDesktopHost({
+      dialogs,
+      grants,
+      recent,
+      recovery,
+      onCloseReply: async (reply) => closeGuard?.onReply(reply),
+      onRecentChanged: setMenu,
+      log,
+    });
+    registerHostIpc(ipcMain, host, (event) => isAppSender(event, appWindowIds, appUrl), log);
+    setMenu();
+    await openWindow();
+    app.on('activate', () => {
+      if (BrowserWindow.getAllWindows().length === 0) void openWindow();
+    });
+  });
+
+  app.on('before-quit', () => { quitting = true; });
+  let ended = false;
+  app.on('will-quit', (event) => {
+    if (ended) return;
+    // The clean-exit bookkeeping must finish before the process goes.
+    event.preventDefault();
+    void recovery.end().catch((error: unknown) => log(String(error))).finally(() => {
+      ended = true;
+      app.quit();
+    });
+  });
+  app.on('window-all-closed', () => {
+    if (process.platform !== 'darwin') app.quit();
+  });
+}

@@ -1,5 +1,5 @@
 import type { IpcMainInvokeEvent } from 'electron';
-import { hostChannels, type HostApi } from '../ui/host/hostApi.ts';
+import { hostChannels, type HostWire } from '../ui/host/hostApi.ts';
 import { argumentCheckers } from './ipcValidation.ts';
 import type { Logger } from './hardenContents.ts';
 
@@ -13,8 +13,8 @@ export interface IpcHandleTarget {
  * its arguments first; a refused one is logged and answered with a plain error that
  * tells the renderer nothing it could use.
  */
-export function registerHostIpc(ipc: IpcHandleTarget, host: HostApi, isTrusted: (event: IpcMainInvokeEvent) => boolean, log: Logger): void {
-  for (const method of Object.keys(hostChannels) as (keyof HostApi)[]) {
+export function registerHostIpc(ipc: IpcHandleTarget, host: HostWire, isTrusted: (event: IpcMainInvokeEvent) => boolean, log: Logger): void {
+  for (const method of Object.keys(hostChannels) as (keyof HostWire)[]) {
     const channel = hostChannels[method];
     ipc.handle(channel, async (event, ...args) => {
       if (!isTrusted(event)) {

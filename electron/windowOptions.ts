@@ -1,16 +1,19 @@
 import type { BrowserWindowConstructorOptions } from 'electron';
+import { DEFAULT_WINDOW, MIN_WINDOW, type Bounds } from './windowState.ts';
 
 /**
  * Options of the app's window: the renderer gets no Node, runs sandboxed and isolated from
  * preload, and cannot load insecure or remote content; it reaches the system only through
- * the host object that `preload` exposes.
+ * the host object that `preload` exposes. `bounds` is the remembered place (see placeWindow);
+ * without x and y the system centres the window.
  */
-export function windowOptions(preloadPath: string): BrowserWindowConstructorOptions {
+export function windowOptions(preloadPath: string, bounds: Partial<Bounds> = DEFAULT_WINDOW): BrowserWindowConstructorOptions {
   return {
-    width: 1200,
-    height: 800,
-    minWidth: 640,
-    minHeight: 420,
+    width: bounds.width ?? DEFAULT_WINDOW.width,
+    height: bounds.height ?? DEFAULT_WINDOW.height,
+    ...(bounds.x !== undefined && bounds.y !== undefined ? { x: bounds.x, y: bounds.y } : {}),
+    minWidth: MIN_WINDOW.width,
+    minHeight: MIN_WINDOW.height,
     show: false,
     title: 'Passline',
     backgroundColor: '#f4f5f3',

@@ -1,0 +1,50 @@
+import { copyFile, open, rename, unlink } from 'node:fs/promises';
+import { basename, dirname, join } from 'node:path';
+import { randomBytes } from 'node:crypto';
+import { atomicWrite } from './atomicWrite.ts';
+
+/**
+ * Where the previous version of a document is kept: next to it, with `.bak` added
+ * ("route.passline" keeps "route.passline.bak"). One backup per document; each save
+ * replaces it with the version that save overwrote.
+ */
+export function backupPathOf(target: string): string {
+  return `${target}.bak`;
+}
+
+/** Copies `source` to `destination` so that `destination` is always one whole version. */
+async function atomicCopy(source: string, destination: string): Promise<boolean> {
+  const temp = join(dirname(destination), `.${basename(destination)}.${randomBytes(6).toString('hex')}.tmp`);
+  try {
+    await copyFile(source, temp);
+  } catch (error) {
+    await unlink(temp).catch(() => undefined);
+    if ((error as NodeJS.ErrnoException).code === 'ENOENT') return false;
+    throw error;
+  }
+  try {
+    const handle = await open(temp, 'r+');
+    try {
+      await handle.sync();
+    } finally {
+      await handle.close();
+    }
+    await rename(temp, destination);
+  } catch (error) {
+    await unlink(temp).catch(() => undefined);
+    throw error;
+  }
+  return true;
+}
+
+/**
+ * Saves a document atomically and keeps what it replaces as the backup. The old file is
+ * copied to the backup first (itself atomically) and only then replaced, so at every
+ * moment the document is the old or the new version and the backup, when present, is one
+ * whole earlier version. Resolves to whether a previous version was kept.
+ */
+export async function saveWithBackup(target: string, data: string | Uint8Array): Promise<boolean> {
+  const kept = await atomicCopy(target, backupPathOf(target));
+  await atomicWrite(target, data);
+  return kept;
+}

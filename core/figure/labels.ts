@@ -5,7 +5,9 @@ import type { PathwayPaint } from './pathwayPaint.ts';
 import { placeLabels, type LabelRequest } from './placeLabels.ts';
 import { boxIndex, type BoxIndex } from './boxIndex.ts';
 import { pathPieces } from './pathPieces.ts';
+import type { AnnotationLabel } from './annotationShapes.ts';
 import type { Box, PathItem, SceneItem } from './scene.ts';
+import { textItem } from './text/textItem.ts';
 
 interface Group {
   level: PlacedLevel;
@@ -17,10 +19,11 @@ interface Group {
  * Labels for all levels: one per level, except that levels at the same spot with the same
  * name and printed energy (a state shared by several pathways) get one label in ink.
  * Placed in slot order, then pathway order, away from every bar and each other, and
- * off the connectors where a spot near the bar allows.
+ * off the connectors where a spot near the bar allows. Annotation labels (`extra`) are
+ * placed after them, by the same rules, beside their arrows.
  * Returns the items and the label boxes (for tests and hit-testing).
  */
-export function labels(ctx: FigureContext, placed: readonly PlacedLevel[], paints: ReadonlyMap<number, PathwayPaint>, bounds: Box, soft: readonly Box[]): { items: SceneItem[]; boxes: Box[] } {
+export function labels(ctx: FigureContext, placed: readonly PlacedLevel[], paints: ReadonlyMap<number, PathwayPaint>, bounds: Box, soft: readonly Box[], extra: { hard: readonly Box[]; labels: readonly AnnotationLabel[] } = { hard: [], labels: [] }): { items: SceneItem[]; boxes: Box[]; annotationBoxes: Box[] } {
   const style: LabelStyle = {
     metrics: ctx.metrics, sizeMm: ctx.sizeMm, decimals: ctx.doc.settings.decimals,
     energyFormat: ctx.doc.figure.energyFormat, unit: ctx.unit, daggerOnTs: ctx.doc.figure.daggerOnTs, autoSubscript: ctx.autoSubscript,
@@ -44,7 +47,8 @@ export function labels(ctx: FigureContext, placed: readonly PlacedLevel[], paint
     prefer: level.point.kind === 'ts' ? 'above' : 'below',
     ...(level.point.labelOffsetMm ? { fixed: level.point.labelOffsetMm } : {}),
   }));
-  const placements = placeLabels(requests, { hard: placed.map((l) => barBox(l, ctx)), soft }, bounds, ctx.gapMm);
+  const all = placeLabels([...requests, ...extra.labels.map((l) => l.request)], { hard: [...placed.map((l) => barBox(l, ctx)), ...extra.hard], soft }, bounds, ctx.gapMm);
+  const placements = all.slice(0, requests.length);
   const items: SceneItem[] = [];
   const boxes = placements.map((p) => p.box);
   const owners = new Map<Box, number>(boxes.map((b, i) => [b, i]));
@@ -58,7 +62,17 @@ export function labels(ctx: FigureContext, placed: readonly PlacedLevel[], paint
     if (line && !crossesOthers(line, index, owners, i)) items.push(line);
     items.push(...blockItems(g.block, box, ctx.theme.ink, colour, { pathway: g.level.point.pathwayId, point: g.level.point.pointId }));
   });
-  return { items, boxes };
+  const annotationBoxes = all.slice(requests.length).map((p, k) => {
+    const { request, lines } = extra.labels[k]!;
+    if (p.displaced) items.push(leaderLine(ctx, request.x, request.y, p.box));
+    let top = p.box.y;
+    for (const l of lines) {
+      items.push(textItem(l, p.box.x, top + l.ascent, ctx.theme.ink, 'annotation'));
+      top += l.ascent + l.descent;
+    }
+    return p.box;
+  });
+  return { items, boxes, annotationBoxes };
 }
 
 function crossesOthers(line: PathItem, index: BoxIndex, owners: ReadonlyMap<Box, number>, own: number): boolean {
@@ -67,11 +81,15 @@ function crossesOthers(line: PathItem, index: BoxIndex, owners: ReadonlyMap<Box,
 
 /** A thin line from the bar's centre to the nearest point of a label moved away from it. */
 function leader(ctx: FigureContext, level: PlacedLevel, box: Box): PathItem {
-  const x = Math.min(Math.max(level.x, box.x), box.x + box.w);
-  const y = Math.min(Math.max(level.y, box.y), box.y + box.h);
+  return { ...leaderLine(ctx, level.x, level.y, box), pathway: level.point.pathwayId, point: level.point.pointId };
+}
+
+function leaderLine(ctx: FigureContext, fromX: number, fromY: number, box: Box): PathItem {
+  const x = Math.min(Math.max(fromX, box.x), box.x + box.w);
+  const y = Math.min(Math.max(fromY, box.y), box.y + box.h);
   return {
-    kind: 'path', role: 'leader', pathway: level.point.pathwayId, point: level.point.pointId,
+    kind: 'path', role: 'leader',
     stroke: { colour: ctx.theme.muted, widthMm: 0.5 * ctx.strokeMm, cap: 'butt' },
-    segments: [{ op: 'M', x: level.x, y: level.y }, { op: 'L', x, y }],
+    segments: [{ op: 'M', x: fromX, y: fromY }, { op: 'L', x, y }],
   };
 }

@@ -1,5 +1,7 @@
 import type { Document } from '../model/schema.ts';
 import type { ResolvedProfile } from '../profile/types.ts';
+import { planAnnotations, planEnergies } from './annotationPlans.ts';
+import { annotationShapes } from './annotationShapes.ts';
 import { arrowBandHeight, coordinateArrow } from './coordinateArrow.ts';
 import { axisBandWidth, axisItems } from './axis.ts';
 import { collectPoints, type LayoutPoint } from './collectPoints.ts';
@@ -31,7 +33,9 @@ export interface LayoutOptions {
 /**
  * Lays a resolved profile out as a scene in mm: levels at shared slots, connectors,
  * labels placed clear of bars and of each other, y axis, reaction-coordinate arrow and
- * legend, all per the document's figure settings. Deterministic: the same inputs give
+ * legend, and the document's annotations (barrier arrows, energetic span brackets, free
+ * text; see annotationPlans.ts and annotationShapes.ts; ones that cannot be drawn are left
+ * out, and `annotationFindings` says why), all per the document's figure settings. Deterministic: the same inputs give
  * the same scene.
  */
 export function layoutFigure(profile: ResolvedProfile, doc: Document, options: LayoutOptions): Scene {
@@ -57,7 +61,8 @@ export function layoutFigure(profile: ResolvedProfile, doc: Document, options: L
   // Room for a label above the highest and below the lowest level.
   const tallest = Math.max(0, ...known.slice(0, 200).map((q) => labelBlock(q.label, q.kind, q.energy, { ...ctx, decimals: doc.settings.decimals, energyFormat: fig.energyFormat, daggerOnTs: fig.daggerOnTs }).h));
   const pad = tallest + 3 * ctx.gapMm;
-  const scale = energyScale(known.map((q) => q.energy), y1 - pad, y0 + pad);
+  const plans = planAnnotations(profile, doc, pathways).plans;
+  const scale = energyScale([...known.map((q) => q.energy), ...planEnergies(plans)], y1 - pad, y0 + pad);
 
   const slots = pathways.flatMap((p) => p.points.map((q) => q.slot));
   const lo = Math.min(0, ...slots);
@@ -77,9 +82,16 @@ export function layoutFigure(profile: ResolvedProfile, doc: Document, options: L
   });
   const paintByIndex = new Map<number, PathwayPaint>(pathways.map((p, i) => [p.index, paints[i]!]));
   const soft = items.flatMap((item) => item.kind === 'path' && item.role === 'connector' ? pathPieces(item.segments, item.stroke!.widthMm / 2) : []);
+  const byId = new Map(placed.map((l) => [`${l.point.pathwayId}\u0000${l.point.pointId}`, l]));
+  const marks = annotationShapes(ctx, plans, {
+    level: (pathway, point) => byId.get(`${pathway}\u0000${point}`),
+    slotX: (slot) => plot.x + (slot - lo + 0.5) * spacing,
+    y: scale.y,
+  });
+  items.push(...marks.items);
   // Labels may reach into the right margin, never over the axis.
   const labelBounds = { ...plot, w: size.widthMm - ctx.gapMm - plot.x };
-  items.push(...labels(ctx, placed, paintByIndex, labelBounds, soft).items);
+  items.push(...labels(ctx, placed, paintByIndex, labelBounds, [...soft, ...marks.soft], marks).items);
   items.push(...key.items);
   if (fig.showCoordinateArrow) items.push(...coordinateArrow(ctx, plot.x, x1, y1 + margin / 2));
   return { widthMm: size.widthMm, heightMm: size.heightMm, background: theme.background, fontFamily: options.metrics.family, items };

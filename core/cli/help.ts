@@ -19,6 +19,8 @@ Usage:
       Reaction thermochemistry by Hess's law from a CSV table of standard formation
       data (header: species,dfH [kJ/mol],S [J/(mol K)],dfG [kJ/mol]; any value column
       may be absent): ΔrH°, ΔrS°, ΔrG° both ways, K and the crossover temperature.
+      --solve SPECIES --given dH=VALUE  back-solve one species' ΔfH° (dH), S° (dS) or
+      ΔfG° (dG) from a known reaction value in kJ/mol or J/(mol K).
 
   passline simulate FILE [--species] [--until SECONDS] [--points N] [--init LABEL=CONC ...] [--pathway NAME] [--temperature K]
       Microkinetic simulation of one pathway (default: the first catalytic cycle) as a

@@ -46,9 +46,9 @@ const COMMANDS: Record<string, { options: Record<string, OptionSpec>; run: Comma
     run: ([file], v, io) => runAnalyze(file!, { json: v.json as boolean | undefined, unit: v.unit as string | undefined, temperature: v.temperature as string | undefined }, io),
   },
   thermo: {
-    options: { json: { type: 'boolean' }, reaction: { type: 'string' }, temperature: { type: 'string' } },
+    options: { json: { type: 'boolean' }, reaction: { type: 'string' }, temperature: { type: 'string' }, solve: { type: 'string' }, given: { type: 'string' } },
     args: 1,
-    run: ([file], v, io) => runThermo(file!, { json: v.json as boolean | undefined, reaction: v.reaction as string | undefined, temperature: v.temperature as string | undefined }, io),
+    run: ([file], v, io) => runThermo(file!, { json: v.json as boolean | undefined, reaction: v.reaction as string | undefined, temperature: v.temperature as string | undefined, solve: v.solve as string | undefined, given: v.given as string | undefined }, io),
   },
   simulate: {
     options: { species: { type: 'boolean' }, until: { type: 'string' }, points: { type: 'string' }, init: { type: 'string', multiple: true }, pathway: { type: 'string' }, temperature: { type: 'string' } },

@@ -1,11 +1,14 @@
 import { thermoReport } from '../thermo/thermoReport.ts';
 import { CliError, EXIT_USAGE, type CliIo } from './io.ts';
 import { positiveOption } from './options.ts';
+import { solveLine } from './thermoSolve.ts';
 
 export interface ThermoOptions {
   reaction?: string | undefined;
   temperature?: string | undefined;
   json?: boolean | undefined;
+  solve?: string | undefined;
+  given?: string | undefined;
 }
 
 const num = (v: number | null, digits: number) => (v === null ? '—' : v.toFixed(digits));
@@ -19,6 +22,11 @@ export function runThermo(tablePath: string, options: ThermoOptions, io: CliIo):
     text = io.readFile(tablePath);
   } catch (error) {
     throw new CliError(`cannot read ${tablePath}: ${(error as NodeJS.ErrnoException).code ?? (error as Error).message}`);
+  }
+  if (options.solve !== undefined || options.given !== undefined) {
+    if (!options.solve || !options.given) throw new CliError('thermo: --solve SPECIES and --given dH=VALUE go together', EXIT_USAGE);
+    io.out(solveLine(text, options.reaction, options.solve, options.given));
+    return;
   }
   const report = thermoReport(text, options.reaction, temperatureK);
   if (!report.ok) throw new CliError(`${tablePath}: ${report.message}`);

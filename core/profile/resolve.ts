@@ -3,17 +3,35 @@ import { makeContext } from './context.ts';
 import { resolvePathwayRaw, type RawPoint } from './resolvePathway.ts';
 import type { Finding, ResolvedPathway, ResolvedProfile } from './types.ts';
 import { runChecks } from './checks/index.ts';
+import { formationSumJ } from './formationSum.ts';
+import { pointComposition } from '../model/composition.ts';
+import type { ResolveContext } from './context.ts';
+import type { Point } from '../model/schema.ts';
 
-function referenceFor(doc: Document, pathwayIndex: number, raws: RawPoint[][]): { raw: RawPoint; label: string } | null {
+/**
+ * The reference energy a point is measured from. A formation-scale point (Hess's law) in a
+ * pathway whose reference is on another scale is anchored to the formation sum of the
+ * reference state's composition, so a pathway's end can be pinned to its Hess value.
+ */
+function referenceValue(scale: RawPoint['raw']['scale'], reference: { raw: RawPoint; point: Point }, ctx: ResolveContext): number | null {
+  const raw = reference.raw.raw;
+  if (raw.scale === scale) return raw.valueJ;
+  const terms = pointComposition(reference.point);
+  if (scale !== 'formation' || !terms) return null;
+  const sum = formationSumJ(terms, ctx);
+  return sum.ok ? sum.valueJ : null;
+}
+
+function referenceFor(doc: Document, pathwayIndex: number, raws: RawPoint[][]): { raw: RawPoint; point: Point } | null {
   const ref = doc.settings.reference;
   if (ref.kind === 'point') {
     const pi = doc.pathways.findIndex((p) => p.id === ref.pathway);
     const qi = pi < 0 ? -1 : doc.pathways[pi]!.points.findIndex((p) => p.id === ref.point);
-    if (qi >= 0) return { raw: raws[pi]![qi]!, label: doc.pathways[pi]!.points[qi]!.label };
+    if (qi >= 0) return { raw: raws[pi]![qi]!, point: doc.pathways[pi]!.points[qi]! };
     return null;
   }
   const first = raws[pathwayIndex]![0];
-  return first ? { raw: first, label: doc.pathways[pathwayIndex]!.points[0]!.label } : null;
+  return first ? { raw: first, point: doc.pathways[pathwayIndex]!.points[0]! } : null;
 }
 
 /**
@@ -36,10 +54,11 @@ export function resolveProfile(doc: Document): ResolvedProfile {
         const where = { pathway: pathway.id, point: point.id };
         let energyJ: number | null = null;
         if (raw.valueJ !== null && reference && reference.raw.raw.valueJ !== null) {
-          if (raw.scale === reference.raw.raw.scale) energyJ = raw.valueJ - reference.raw.raw.valueJ;
+          const base = referenceValue(raw.scale, reference, ctx);
+          if (base !== null) energyJ = raw.valueJ - base;
           else findings.push({
             severity: 'error', code: 'no-common-reference', ...where,
-            message: `this point is on the ${raw.scale} scale but the reference "${reference.label}" is on the ${reference.raw.raw.scale} scale; they cannot be subtracted`,
+            message: `this point is on the ${raw.scale} scale but the reference "${reference.point.label}" is on the ${reference.raw.raw.scale} scale${raw.scale === 'formation' ? ' and has no composition with formation data' : ''}; they cannot be subtracted`,
           });
         }
         if (energyJ === null && !findings.some((f) => f.point === point.id && f.pathway === pathway.id && f.severity === 'error')) {

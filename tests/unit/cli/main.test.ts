@@ -87,6 +87,13 @@ describe('passline thermo', () => {
     expect(r.warnings.join(' ')).toContain('not a process-safety assessment');
   });
 
+  it('back-solves a formation value: ΔfH°(CH4, g) = −74.873 kJ/mol from ΔrH° = −890.309 (NIST-JANAF, REFERENCE.md §4)', async () => {
+    const { code, out } = await run(['thermo', 'tests/fixtures/janafCombustion.csv', '--reaction', reaction, '--solve', 'CH4(g)', '--given', 'dH=-890.309']);
+    expect(code).toBe(0);
+    expect(out).toMatch(/^ΔfH°\(CH4\(g\)\) = -74\.873 kJ mol⁻¹/);
+    expect((await run(['thermo', 'tests/fixtures/janafCombustion.csv', '--reaction', reaction, '--solve', 'CH4(g)', '--given', 'dX=1'])).code).toBe(2);
+  });
+
   it('names an unknown species, an unbalanced reaction and a missing option', async () => {
     expect((await run(['thermo', 'tests/fixtures/janafCombustion.csv', '--reaction', 'CH4(g) + 2 O2(g) -> CO2(g) + 2 H2O(g)'])).err).toContain("unknown species 'H2O(g)'");
     expect((await run(['thermo', 'tests/fixtures/janafCombustion.csv', '--reaction', 'CH4(g) + O2(g) -> CO2(g) + 2 H2O(l)'])).err).toContain('unbalanced: 2 more O on the right');

@@ -202,6 +202,18 @@ describe('Hess route', () => {
     expect(resolveProfile(shift('G')).findings).toEqual([]);
   });
 
+  it('anchors a pathway\'s end to its Hess value when the start is typed with a composition', () => {
+    const doc = onePathway([
+      typed('CO + H2O', 'min', 0, { composition: terms('CO', 'H2O') }),
+      typed('TS', 'ts', 30),
+      { id: 'P', label: 'CO2 + H2', kind: 'min', energy: { mode: 'formation', terms: terms('CO2', 'H2') } },
+    ], { settings: { unit: 'kJ/mol' }, species: janaf });
+    const profile = resolveProfile(doc);
+    expect(profile.pathways[0]!.points[2]!.energyJ! / 1000).toBeCloseTo(-28.644, 3); // NIST-JANAF ΔrG° of R3
+    expect(profile.pathways[0]!.points[2]!.provenance.route).toBe('formation');
+    expect(profile.findings).toEqual([]);
+  });
+
   it('flags a stepwise pathway whose overall energy disagrees with Hess\'s law', () => {
     const typedRoute = (kJ: number) => onePathway([
       typed('CO + H2O', 'min', 0, { composition: terms('CO', 'H2O') }),

@@ -14,7 +14,9 @@ function checkEnergies(energiesJ: readonly number[]): void {
 export function ensembleFreeEnergyJ(energiesJ: readonly number[], temperatureK: number): number {
   checkEnergies(energiesJ);
   const rt = rtJoules(temperatureK);
-  return -rt * logSumExp(energiesJ.map((g) => -g / rt));
+  // Shifted by min G in energy units first, so that one state gives exactly G_eff = G.
+  const min = Math.min(...energiesJ);
+  return min - rt * logSumExp(energiesJ.map((g) => -(g - min) / rt));
 }
 
 /** Boltzmann populations p_i = exp(−(G_i − G_eff)/RT); they sum to 1. */

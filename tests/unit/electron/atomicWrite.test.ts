@@ -1,10 +1,9 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { spawn } from 'node:child_process';
 import { mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { atomicWrite } from '../../../electron/atomicWrite.ts';
+import { killDelays, killMidWrite } from './helpers/killMidWrite.ts';
 
 let folder: string;
 beforeEach(() => { folder = mkdtempSync(join(tmpdir(), 'passline-atomic-')); });
@@ -40,26 +39,16 @@ describe('atomicWrite', () => {
 
 // A process killed at an arbitrary moment must leave the target as one whole version.
 describe('atomicWrite under kill -9', () => {
-  const child = fileURLToPath(new URL('./helpers/rewriteForever.ts', import.meta.url));
   const size = 2_000_000;
 
-  async function killAfter(target: string, ms: number): Promise<void> {
-    const proc = spawn(process.execPath, ['--import', 'tsx', child, target, String(size)], { stdio: ['ignore', 'pipe', 'inherit'] });
-    await new Promise<void>((resolve) => proc.stdout.once('data', () => resolve()));
-    await new Promise((resolve) => setTimeout(resolve, ms));
-    const exited = new Promise((resolve) => proc.once('exit', resolve));
-    proc.kill('SIGKILL');
-    await exited;
-  }
-
-  it('leaves the old or the new version, never a torn file', async () => {
+  it('leaves the old or the new version, never a torn file, at many kill points', async () => {
     const target = join(folder, 'doc.passline');
     writeFileSync(target, 'A'.repeat(size));
-    for (const ms of [0, 3, 7, 15, 31, 60]) {
-      await killAfter(target, ms);
+    for (const ms of killDelays(16)) {
+      await killMidWrite(target, size, ms, 'plain');
       const text = readFileSync(target, 'utf8');
       expect(text.length).toBe(size);
       expect(text === 'A'.repeat(size) || text === 'B'.repeat(size)).toBe(true);
     }
-  }, 60_000);
+  }, 90_000);
 });

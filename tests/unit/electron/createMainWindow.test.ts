@@ -1,16 +1,17 @@
 import { describe, expect, it, vi } from 'vitest';
 
 // Electron's binary is absent here (STACK.md): a recording BrowserWindow stands in for it.
-const created: { options: unknown; loaded: string[]; shown: number; once: Map<string, () => void> }[] = [];
+const created: { options: unknown; loaded: string[]; shown: number; maximized: number; once: Map<string, () => void> }[] = [];
 vi.mock('electron', () => ({
   BrowserWindow: class {
-    record = { options: undefined as unknown, loaded: [] as string[], shown: 0, once: new Map<string, () => void>() };
+    record = { options: undefined as unknown, loaded: [] as string[], shown: 0, maximized: 0, once: new Map<string, () => void>() };
     constructor(options: unknown) {
       this.record.options = options;
       created.push(this.record);
     }
     once(event: string, listener: () => void) { this.record.once.set(event, listener); }
     show() { this.record.shown += 1; }
+    maximize() { this.record.maximized += 1; }
     loadFile(path: string) { this.record.loaded.push(path); return Promise.resolve(); }
   },
 }));
@@ -26,5 +27,13 @@ describe('createMainWindow', () => {
     expect(win.shown).toBe(0);
     win.once.get('ready-to-show')!();
     expect(win.shown).toBe(1);
+  });
+
+  it('opens at the given place and maximises before showing when it was maximised', () => {
+    createMainWindow({ preload: '/p.cjs', rendererIndex: '/i.html' }, { bounds: { x: 5, y: 6, width: 700, height: 500 }, maximized: true });
+    const win = created.at(-1)!;
+    expect(win.options).toMatchObject({ x: 5, y: 6, width: 700, height: 500 });
+    win.once.get('ready-to-show')!();
+    expect([win.maximized, win.shown]).toEqual([1, 1]);
   });
 });

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { checkExportArgs, checkNoArgs, checkSaveArgs, IPC_LIMITS } from '../../../electron/ipcValidation.ts';
+import { argumentCheckers, checkAutosaveArgs, checkCloseReplyArgs, checkExportArgs, checkNoArgs, checkPathArgs, checkSaveArgs, IPC_LIMITS } from '../../../electron/ipcValidation.ts';
+import { hostChannels } from '../../../ui/host/hostApi.ts';
 
 const absolute = process.platform === 'win32' ? 'C:\\docs\\a.passline' : '/home/u/a.passline';
 const reason = (checked: { ok: boolean; reason?: string }) => (checked.ok ? 'ok' : checked.reason);
@@ -50,5 +51,59 @@ describe('checkNoArgs', () => {
   it('accepts nothing but no arguments', () => {
     expect(checkNoArgs([]).ok).toBe(true);
     expect(reason(checkNoArgs(['/etc/passwd']))).toBe('expected no arguments');
+  });
+});
+
+describe('checkPathArgs (open a known or dropped file)', () => {
+  it('accepts one absolute .passline path', () => {
+    expect(checkPathArgs([absolute])).toEqual({ ok: true, value: [absolute] });
+  });
+
+  it('refuses missing, extra, relative, empty, foreign and over-long paths', () => {
+    expect(reason(checkPathArgs([]))).toBe('expected one path');
+    expect(reason(checkPathArgs([absolute, absolute]))).toBe('expected one path');
+    expect(reason(checkPathArgs(['']))).toBe('path: expected an absolute path');
+    expect(reason(checkPathArgs([{ path: absolute }]))).toBe('path: expected a string');
+    expect(reason(checkPathArgs([absolute.replace('.passline', '.exe')]))).toBe('path: expected a .passline file');
+    expect(reason(checkPathArgs([`${absolute.slice(0, 3)}${'d/'.repeat(IPC_LIMITS.pathChars)}a.passline`]))).toBe('path: expected an absolute path');
+  });
+});
+
+describe('checkAutosaveArgs', () => {
+  it('accepts a snapshot, with or without its path, and null', () => {
+    expect(checkAutosaveArgs([{ name: 'untitled.passline', text: '{}' }]).ok).toBe(true);
+    expect(checkAutosaveArgs([{ name: 'a.passline', text: '{}', path: absolute }]).ok).toBe(true);
+    expect(checkAutosaveArgs([null])).toEqual({ ok: true, value: [null] });
+  });
+
+  it('refuses other shapes, names and sizes', () => {
+    expect(reason(checkAutosaveArgs([]))).toBe('expected one snapshot or null');
+    expect(reason(checkAutosaveArgs(['text']))).toBe('expected one snapshot or null');
+    expect(reason(checkAutosaveArgs([{ name: 'a.passline', text: '', savedAt: 'now' }]))).toBe('unexpected field savedAt');
+    expect(reason(checkAutosaveArgs([{ name: '../a.passline', text: '' }]))).toMatch(/^name: expected a file name without folders/);
+    expect(reason(checkAutosaveArgs([{ name: 'a.passline', text: 'x'.repeat(IPC_LIMITS.textChars + 1) }]))).toMatch(/^text: longer than/);
+    expect(reason(checkAutosaveArgs([{ name: 'a.passline', text: '', path: 'rel.passline' }]))).toBe('path: expected an absolute path');
+  });
+});
+
+describe('checkCloseReplyArgs', () => {
+  it('accepts a dirty flag and a name', () => {
+    expect(checkCloseReplyArgs([{ dirty: true, name: 'route.passline' }])).toEqual({ ok: true, value: [{ dirty: true, name: 'route.passline' }] });
+  });
+
+  it('refuses a dirty flag that is not a boolean, odd names and extra fields', () => {
+    expect(reason(checkCloseReplyArgs([{ dirty: 'yes', name: 'a' }]))).toBe('dirty: expected true or false');
+    expect(reason(checkCloseReplyArgs([{ dirty: false, name: 'a\nb' }]))).toMatch(/^name: expected up to 255 characters/);
+    expect(reason(checkCloseReplyArgs([{ dirty: false, name: 'a'.repeat(300) }]))).toMatch(/^name:/);
+    expect(reason(checkCloseReplyArgs([{ dirty: false, name: 'a', close: true }]))).toBe('unexpected field close');
+  });
+});
+
+describe('argumentCheckers', () => {
+  it('has a checker for every channel, and no-argument methods refuse arguments', () => {
+    expect(Object.keys(argumentCheckers).sort()).toEqual(Object.keys(hostChannels).sort());
+    for (const method of ['recentFiles', 'recoveryOffer', 'dismissRecovery', 'hostInfo', 'openDocument'] as const) {
+      expect(argumentCheckers[method](['x']).ok).toBe(false);
+    }
   });
 });

@@ -41,4 +41,22 @@ describe('registerHostIpc', () => {
     expect(fake.exported).toEqual([]);
     expect(log).toHaveBeenCalledTimes(2);
   });
+
+  it('refuses a made-up dropped file, a malformed autosave and a close reply with a bad flag', async () => {
+    const { fake, call, log } = setUp(true);
+    await expect(call(hostChannels.openDroppedFile, '')).rejects.toThrow('request refused: path: expected an absolute path');
+    await expect(call(hostChannels.autosave, { name: 'a.passline', text: 1 })).rejects.toThrow('request refused: text: expected a string');
+    await expect(call(hostChannels.replyClose, { dirty: 'no', name: 'a.passline' })).rejects.toThrow(/dirty: expected true or false/);
+    expect(fake.autosaved).toEqual([]);
+    expect(fake.closeReplies).toEqual([]);
+    expect(log).toHaveBeenCalledTimes(3);
+  });
+
+  it('passes a close reply and an autosave through once checked', async () => {
+    const { fake, call } = setUp(true);
+    await call(hostChannels.replyClose, { dirty: false, name: 'a.passline' });
+    await call(hostChannels.autosave, null);
+    expect(fake.closeReplies).toEqual([{ dirty: false, name: 'a.passline' }]);
+    expect(fake.autosaved).toEqual([null]);
+  });
 });

@@ -17,4 +17,11 @@ describe('windowOptions', () => {
   it('loads the given preload script', () => {
     expect(webPreferences?.preload).toBe('/app/preload.cjs');
   });
+
+  it('opens at the remembered place, or centred at the default size without x and y', () => {
+    expect(windowOptions('/p', { x: 10, y: 20, width: 900, height: 700 })).toMatchObject({ x: 10, y: 20, width: 900, height: 700, minWidth: 640, minHeight: 420 });
+    const centred = windowOptions('/p', { width: 1200, height: 800 });
+    expect(centred).not.toHaveProperty('x');
+    expect(centred).toMatchObject({ width: 1200, height: 800 });
+  });
 });

@@ -1,8 +1,11 @@
-// Child process for the crash test: rewrites the target with versions A and B, alternately,
-// until it is killed. Arguments: target path, bytes per version.
+// Child process for the crash tests: rewrites the target with versions A and B, alternately,
+// until it is killed. Arguments: target path, bytes per version, and "backup" to save the
+// way documents are saved (keeping the previous version) instead of a plain atomic write.
 import { atomicWrite } from '../../../../electron/atomicWrite.ts';
+import { saveWithBackup } from '../../../../electron/saveWithBackup.ts';
 
-const [target, size] = process.argv.slice(2);
+const [target, size, mode] = process.argv.slice(2);
 const versions = ['A', 'B'].map((c) => c.repeat(Number(size)));
+const write = mode === 'backup' ? saveWithBackup : atomicWrite;
 process.stdout.write('ready\n');
-for (let i = 0; ; i++) await atomicWrite(target!, versions[i % 2]!);
+for (let i = 0; ; i++) await write(target!, versions[i % 2]!);

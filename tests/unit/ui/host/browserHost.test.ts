@@ -93,3 +93,26 @@ describe('browser host: save with a save picker', () => {
     expect(new Uint8Array(await written[0]!.arrayBuffer())).toEqual(new Uint8Array([137, 80, 78, 71]));
   });
 });
+
+describe('browser host: desktop-only abilities', () => {
+  it('reads a dropped file, has no recent list, cannot reopen by name and ignores close replies', async () => {
+    const host = createBrowserHost({ document } as HostWindow);
+    expect(await host.openDroppedFile(new File(['{"a":1}'], 'dropped.passline'))).toEqual({ name: 'dropped.passline', text: '{"a":1}' });
+    expect(await host.recentFiles()).toEqual([]);
+    await expect(host.openKnownFile('/d/a.passline')).rejects.toThrow(/cannot reopen a file by its name/);
+    await expect(host.replyClose({ dirty: true, name: 'a.passline' })).resolves.toBeUndefined();
+  });
+
+  it('refuses a dropped file over the size limit', async () => {
+    const big = new File(['x'], 'huge.passline');
+    Object.defineProperty(big, 'size', { value: MAX_OPEN_BYTES + 1 });
+    await expect(createBrowserHost({ document } as HostWindow).openDroppedFile(big)).rejects.toThrow(/huge\.passline is too large/);
+  });
+
+  it('keeps the working copy in localStorage and offers it to the next page', async () => {
+    window.localStorage.clear();
+    await createBrowserHost().autosave({ name: 'route.passline', text: 'draft' });
+    expect(await createBrowserHost().recoveryOffer()).toMatchObject({ name: 'route.passline', text: 'draft' });
+    window.localStorage.clear();
+  });
+});

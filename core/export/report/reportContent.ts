@@ -1,0 +1,84 @@
+import type { DocumentAnalysis } from '../../analysis/analyseDocument.ts';
+import type { Scene } from '../../figure/scene.ts';
+import type { Document } from '../../model/schema.ts';
+import type { AnalysisReport } from '../../report/analysisReport.ts';
+import { unitLabel } from '../../units/energy.ts';
+import { analysisTables } from '../analysisTables.ts';
+import type { Table } from '../tables.ts';
+import { CAUTION, METHODS } from './methodsText.ts';
+import type { ReportPages } from './reportPages.ts';
+
+const STANDARD_STATES: Record<Document['settings']['standardState'], string> = {
+  'as-computed': 'as computed (no correction)',
+  '1atm-to-1M': '1 atm → 1 mol L⁻¹ per solute species',
+  '1bar-to-1M': '1 bar → 1 mol L⁻¹ per solute species',
+};
+
+/** Writes the report's sections onto `pages`: figure, settings, tables, methods, findings, caution. */
+export function reportContent(pages: ReportPages, doc: Document, analysis: DocumentAnalysis, report: AnalysisReport, scene: Scene): void {
+  const s = doc.settings;
+  const unit = unitLabel(report.unit);
+  const tables = analysisTables(report, s.decimals);
+  pages.heading(doc.title || 'Energy profile', 1.7);
+  pages.paragraph(`Passline report: Δ${report.quantity} in ${unit} at ${report.temperatureK} K.`);
+  pages.figure(scene);
+  pages.heading('Settings');
+  pages.table(['setting', 'value'], [
+    ['quantity', `Δ${s.quantity} (${{ E: 'electronic energy', H: 'enthalpy', G: 'Gibbs energy' }[s.quantity]})`],
+    ['temperature', `${s.temperatureK} K`],
+    ['standard state', STANDARD_STATES[s.standardState]],
+    ['energy unit', unit],
+    ['transmission coefficient κ', String(s.transmission)],
+    ['reference state', s.reference.kind === 'first' ? 'first point of each pathway' : `${s.reference.point} of ${s.reference.pathway}`],
+  ]);
+  section(pages, 'Energies and where they come from', tables.points);
+  section(pages, 'Steps', stepsForPage(report, s.decimals), 'Rate constants from the Eyring equation with their units; t½ is the first-order half-life of the forward step.');
+  section(pages, 'Effective barriers', tables.effectiveBarriers);
+  section(pages, 'Energetic span of catalytic cycles', tables.energeticSpans, report.pathways.some((p) => p.energeticSpan) ? `Convention: ${report.pathways.find((p) => p.energeticSpan)!.energeticSpan!.convention}.` : undefined);
+  section(pages, 'Comparisons', tables.comparisons);
+  pages.heading('Methods');
+  for (const m of METHODS) pages.paragraph(m);
+  pages.heading('Findings');
+  if (analysis.findings.length === 0) pages.paragraph('No findings.');
+  for (const f of analysis.findings) pages.paragraph(`${f.severity} [${f.code}] ${f.message}${f.pathway ? ` (${f.pathway}${f.point ? ` / ${f.point}` : ''})` : ''}`);
+  pages.heading('Caution');
+  pages.paragraph(CAUTION);
+}
+
+function section(pages: ReportPages, title: string, table: Table, note?: string): void {
+  pages.heading(title);
+  if (table.rows.length === 0) {
+    pages.paragraph('None in this document.');
+    return;
+  }
+  if (note) pages.paragraph(note, 0.9);
+  pages.table(table.columns, table.rows.map((r) => r.map(cell)));
+}
+
+/** The steps table with each rate constant and its unit in one cell, so it fits a portrait page. */
+function stepsForPage(report: AnalysisReport, decimals: number): Table {
+  const u = unitLabel(report.unit);
+  const q = report.quantity;
+  const en = (v: number | null) => (v === null ? null : Number(v.toFixed(decimals)));
+  const k = (v: number | null, unit: string) => (v === null ? '—' : `${sci(v)} ${unit}`);
+  return {
+    columns: ['pathway', 'step', `Δ${q}‡ forward / ${u}`, `Δ${q}‡ reverse / ${u}`, `Δ${q} step / ${u}`, 'k forward', 'k reverse', 't½ / s'],
+    rows: report.pathways.flatMap((p) => p.steps.map((st) => [
+      p.name, `${st.from} → ${st.ts ?? '(no TS)'} → ${st.to}`, en(st.barrierForward), en(st.barrierReverse), en(st.reactionEnergy),
+      k(st.kForward, st.kForwardUnit), k(st.kReverse, st.kReverseUnit), st.halfLifeSeconds === null ? null : sci(st.halfLifeSeconds),
+    ])),
+  };
+}
+
+function sci(v: number): string {
+  return v.toPrecision(3).replace('-', '\u2212');
+}
+
+function cell(value: string | number | null): string {
+  if (value === null) return '—';
+  if (typeof value === 'string') return value;
+  // Very large or small numbers read better in scientific notation (4 significant digits).
+  const a = Math.abs(value);
+  const text = a !== 0 && (a >= 1e5 || a < 1e-3) ? value.toExponential(3).replace('e+', 'e') : String(value);
+  return text.replace(/-/g, '\u2212');
+}

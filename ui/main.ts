@@ -1,6 +1,7 @@
 import { mount } from 'svelte';
 import App from './App.svelte';
 import { DocumentStore } from './state/documentStore.svelte.ts';
+import { FigureFont } from './state/figureFont.svelte.ts';
 import { DEMO_FILE_NAME, loadDemo } from './demo/demoDocument.ts';
 import { pickHost } from './host/pickHost.ts';
 import { makeDocument } from '../core/model/load.ts';
@@ -10,7 +11,9 @@ const demo = loadDemo();
 const store = new DocumentStore(pickHost(), demo.ok ? demo.doc : makeDocument({ title: '' }), demo.ok ? DEMO_FILE_NAME : 'untitled.passline');
 // A broken bundled demo is our bug, but the user still gets a working, empty app.
 if (!demo.ok) store.problem = { fileName: DEMO_FILE_NAME, errors: demo.errors };
+const font = new FigureFont();
+void font.load();
 
 const target = document.getElementById('app');
 if (!target) throw new Error('index.html lacks the #app element');
-mount(App, { target, props: { store } });
+mount(App, { target, props: { store, font } });

@@ -1,8 +1,9 @@
 import { parseDocument, serializeDocument, type DocumentError } from '../../core/model/load.ts';
 import type { Document } from '../../core/model/schema.ts';
-import { resolveProfile } from '../../core/profile/resolve.ts';
+import { analyseDocument, type DocumentAnalysis } from '../../core/analysis/analyseDocument.ts';
 import type { ResolvedProfile } from '../../core/profile/types.ts';
-import { DOCUMENT_EXTENSION, type HostApi } from '../host/hostApi.ts';
+import { closeGroup, record, redo, startHistory, undo, type History, type RecordOptions } from '../../core/edit/history.ts';
+import { DOCUMENT_EXTENSION, type ExportRequest, type HostApi } from '../host/hostApi.ts';
 import { suggestFileName } from './suggestFileName.ts';
 import { userMessage } from './userMessage.ts';
 
@@ -12,27 +13,97 @@ export interface OpenProblem {
   errors: DocumentError[];
 }
 
+/** The point the user has selected (in the canvas, the mechanism panel or a finding). */
+export interface Selection {
+  pathway: string;
+  point: string;
+}
+
 /**
- * The open document and what the shell shows about it. The document is an immutable value
- * in `$state.raw`: it is replaced, never mutated, so `core` always receives a plain object.
+ * The open document, its undo history and what the shell shows about it. The document is
+ * an immutable value in `$state.raw`: it is replaced, never mutated, so `core` always
+ * receives a plain object.
  */
 export class DocumentStore {
-  doc: Document;
+  history: History;
   fileName: string;
   /** Host token for saving back in place (a path on the desktop). */
   filePath: string | undefined = $state(undefined);
   problem: OpenProblem | null = $state.raw(null);
   status = $state('');
   busy = $state(false);
+  selection: Selection | null = $state.raw(null);
+  /** The document as last opened or saved, to tell whether there are unsaved changes. */
+  saved: Document;
+  readonly doc: Document;
+  /** Everything core computes from the document (energies J/mol). */
+  readonly analysis: DocumentAnalysis;
   /** The document resolved by core: energies in J/mol with provenance, and findings. */
   readonly profile: ResolvedProfile;
+  readonly dirty: boolean;
   readonly #host: HostApi;
 
   constructor(host: HostApi, initial: Document, fileName: string) {
     this.#host = host;
-    this.doc = $state.raw(initial);
+    this.history = $state.raw(startHistory(initial));
+    this.saved = $state.raw(initial);
     this.fileName = $state(fileName);
-    this.profile = $derived(resolveProfile(this.doc));
+    this.doc = $derived(this.history.present);
+    this.analysis = $derived(analyseDocument(this.doc));
+    this.profile = $derived(this.analysis.profile);
+    this.dirty = $derived(this.doc !== this.saved);
+  }
+
+  /** Records the result of an edit; an edit that changed nothing leaves history alone. */
+  apply(next: Document, options: RecordOptions = {}): boolean {
+    if (next === this.doc) return false;
+    this.history = record(this.history, next, options);
+    return true;
+  }
+
+  /** Ends a drag or typing burst, so the next edit is its own undo step. */
+  endGroup(): void {
+    this.history = closeGroup(this.history);
+  }
+
+  get canUndo(): boolean { return this.history.past.length > 0; }
+  get canRedo(): boolean { return this.history.future.length > 0; }
+
+  undo(): void {
+    if (!this.canUndo) return;
+    this.history = undo(this.history);
+    this.status = 'Undone.';
+  }
+
+  redo(): void {
+    if (!this.canRedo) return;
+    this.history = redo(this.history);
+    this.status = 'Redone.';
+  }
+
+  /** Starts over with `doc` (a new or opened document): fresh history, nothing unsaved. */
+  replace(doc: Document, fileName: string, filePath?: string): void {
+    this.history = startHistory(doc);
+    this.saved = doc;
+    this.fileName = fileName;
+    this.filePath = filePath;
+    this.selection = null;
+  }
+
+  /** Opens text the user gave (a dropped file): valid replaces the document, invalid leaves it untouched. */
+  openText(name: string, text: string, path?: string): boolean {
+    const result = parseDocument(text);
+    if (!result.ok) {
+      this.problem = { fileName: name, errors: result.errors };
+      this.status = `${name} was not opened: ${result.errors.length} problem${result.errors.length === 1 ? '' : 's'} found.`;
+      return false;
+    }
+    this.replace(result.doc, name, path);
+    this.problem = null;
+    this.status = result.migratedFrom
+      ? `Opened ${name} (updated from format version ${result.migratedFrom}; saving writes the new version).`
+      : `Opened ${name}.`;
+    return true;
   }
 
   /** Asks the host for a file; a valid one replaces the document, a bad one leaves it untouched. */
@@ -40,19 +111,7 @@ export class DocumentStore {
     await this.#run(async () => {
       const file = await this.#host.openDocument();
       if (!file) return void (this.status = 'Open cancelled.');
-      const result = parseDocument(file.text);
-      if (!result.ok) {
-        this.problem = { fileName: file.name, errors: result.errors };
-        this.status = `${file.name} was not opened: ${result.errors.length} problem${result.errors.length === 1 ? '' : 's'} found.`;
-        return;
-      }
-      this.doc = result.doc;
-      this.fileName = file.name;
-      this.filePath = file.path;
-      this.problem = null;
-      this.status = result.migratedFrom
-        ? `Opened ${file.name} (updated from format version ${result.migratedFrom}; saving writes the new version).`
-        : `Opened ${file.name}.`;
+      this.openText(file.name, file.text, file.path);
     }, 'open');
   }
 
@@ -66,6 +125,18 @@ export class DocumentStore {
     await this.#save(this.filePath);
   }
 
+  /** Hands an exported figure or table to the host (the user picks where it goes). */
+  async exportFile(request: ExportRequest): Promise<boolean> {
+    let done = false;
+    await this.#run(async () => {
+      const saved = await this.#host.exportFile(request);
+      if (!saved) return void (this.status = 'Export cancelled.');
+      this.status = `Exported ${saved.name}.`;
+      done = true;
+    }, 'export');
+    return done;
+  }
+
   /** Hides the open-problem alert. */
   dismissProblem(): void {
     this.problem = null;
@@ -73,10 +144,12 @@ export class DocumentStore {
 
   async #save(path: string | undefined): Promise<void> {
     await this.#run(async () => {
-      const suggestedName = suggestFileName(this.fileName, this.doc.title, DOCUMENT_EXTENSION);
-      const request = path ? { suggestedName, text: serializeDocument(this.doc), path } : { suggestedName, text: serializeDocument(this.doc) };
+      const doc = this.doc;
+      const suggestedName = suggestFileName(this.fileName, doc.title, DOCUMENT_EXTENSION);
+      const request = path ? { suggestedName, text: serializeDocument(doc), path } : { suggestedName, text: serializeDocument(doc) };
       const saved = await this.#host.saveDocument(request);
       if (!saved) return void (this.status = 'Save cancelled.');
+      this.saved = doc;
       this.fileName = saved.name;
       this.filePath = saved.path;
       this.status = `Saved ${saved.name}.`;

@@ -1,0 +1,75 @@
+import type { Document, EnergySpec, Estimate, SpeciesTerm } from '../../core/model/schema.ts';
+import type { ResolvedPathway } from '../../core/profile/types.ts';
+import { fromJoulesPerMol } from '../../core/units/energy.ts';
+
+export type EnergyMode = EnergySpec['mode'];
+
+/** How each energy mode is named in the mechanism panel. */
+export const MODE_NAMES: Record<EnergyMode, string> = {
+  value: 'typed value',
+  step: 'step',
+  barrier: 'barrier',
+  species: 'species sum',
+  formation: 'formation data',
+  estimate: 'estimate',
+};
+
+/** Starting parameters of each estimate method (our choice of typical magnitudes). */
+export const ESTIMATE_DEFAULTS: Record<Estimate['method'], Estimate> = {
+  marcus: { method: 'marcus', lambda: 40, unit: 'kcal/mol' },
+  bep: { method: 'bep', e0: 20, alpha: 0.5, unit: 'kcal/mol' },
+  rateConstant: { method: 'rateConstant', k: 1, molecularity: 1 },
+  halfLife: { method: 'halfLife', seconds: 3600 },
+  eyringFit: { method: 'eyringFit', data: [{ temperatureK: 298.15, k: 1e-3 }, { temperatureK: 318.15, k: 1e-2 }] },
+  arrhenius: { method: 'arrhenius', data: [{ temperatureK: 298.15, k: 1e-3 }, { temperatureK: 318.15, k: 1e-2 }] },
+};
+
+const round = (v: number, decimals: number) => Number(v.toFixed(decimals)) + 0;
+
+/**
+ * The energy a point gets when the user switches it to another mode, chosen so that its
+ * level stays where it is wherever that can be worked out (value, step, barrier); or a
+ * message saying what is missing (no species yet).
+ */
+export function switchMode(mode: EnergyMode, doc: Document, resolved: ResolvedPathway | undefined, index: number): EnergySpec | string {
+  const { unit, decimals } = doc.settings;
+  const points = resolved?.points ?? [];
+  const own = points[index]?.energyJ ?? null;
+  let previousMin: number | null = null;
+  for (let i = index - 1; i >= 0; i--) if (points[i]!.kind === 'min') { previousMin = points[i]!.energyJ; break; }
+  const display = (j: number | null) => (j === null ? 0 : round(fromJoulesPerMol(j, unit), decimals));
+  switch (mode) {
+    case 'value': return { mode, value: display(own), unit };
+    case 'step': case 'barrier':
+      return { mode, value: own !== null && previousMin !== null ? display(own - previousMin) : 0, unit };
+    case 'species': case 'formation': {
+      const first = doc.species[0];
+      if (!first) return 'add a species in the species sheet first';
+      const terms: SpeciesTerm[] = doc.pathways.flatMap((p) => p.points).find((p) => p.id === points[index]?.id)?.composition ?? [{ species: first.id, count: 1 }];
+      return { mode, terms };
+    }
+    case 'estimate': return { mode, estimate: ESTIMATE_DEFAULTS.marcus };
+  }
+}
+
+/** "2 cat + sub" for species terms. */
+export function termsText(terms: readonly SpeciesTerm[]): string {
+  return terms.map((t) => (t.count === 1 ? t.species : `${t.count} ${t.species}`)).join(' + ');
+}
+
+/** Reads "2 cat + sub" against the known species ids; a message names the first bad part. */
+export function readTerms(text: string, ids: readonly string[]): SpeciesTerm[] | string {
+  const parts = text.split('+').map((p) => p.trim()).filter((p) => p !== '');
+  if (parts.length === 0) return 'expected at least one species, e.g. "2 cat + sub"';
+  const terms: SpeciesTerm[] = [];
+  for (const part of parts) {
+    const match = /^(?:(\d+(?:\.\d+)?)\s*(?:[×x*]\s*)?)?(\S+)$/.exec(part);
+    if (!match) return `cannot read "${part}"; write a count then a species id, e.g. "2 cat"`;
+    const count = match[1] ? Number(match[1]) : 1;
+    const species = match[2]!;
+    if (!ids.includes(species)) return `no species with id "${species}" (known: ${ids.join(', ') || 'none'})`;
+    if (!(count > 0)) return `the count of ${species} must be positive`;
+    terms.push({ species, count });
+  }
+  return terms;
+}

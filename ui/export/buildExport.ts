@@ -1,0 +1,49 @@
+import type { Document } from '../../core/model/schema.ts';
+import type { DocumentAnalysis } from '../../core/analysis/analyseDocument.ts';
+import type { FontMetrics } from '../../core/figure/font/fontMetrics.ts';
+import { layoutFigure } from '../../core/figure/layoutFigure.ts';
+import type { Preset } from '../../core/figure/presets.ts';
+import type { ThemeName } from '../../core/figure/themes.ts';
+import { sceneToSvg } from '../../core/export/sceneToSvg.ts';
+import { sceneToPdf } from '../../core/export/sceneToPdf.ts';
+import { pointsTable, tableToCsv, tableToMarkdown } from '../../core/export/tables.ts';
+import { analysisReport } from '../../core/report/analysisReport.ts';
+import type { ExportMimeType } from '../host/hostApi.ts';
+import { stepsTable } from './stepsTable.ts';
+import { svgToPng } from './svgToPng.ts';
+
+/** What can be exported from the editor. */
+export type ExportKind = 'svg' | 'pdf' | 'png' | 'points-csv' | 'points-md' | 'steps-csv' | 'steps-md';
+
+/** Export choices: figure size preset, theme and PNG resolution. */
+export interface ExportChoice { kind: ExportKind; preset: Preset; theme: ThemeName; dpi: number }
+
+/** The file to hand to the host, and a preview: SVG text for figures, the text itself for tables. */
+export interface ExportFile { data: string | Uint8Array; mimeType: ExportMimeType; extension: string; preview: { svg?: string; text?: string } }
+
+/** Figure font: its metrics lay the scene out; its bytes are embedded in PDF and PNG. */
+export interface ExportFont { metrics: FontMetrics; bytes: Uint8Array }
+
+/** Lays the figure out with the chosen preset and theme (the same scene the canvas draws) and writes the chosen format. */
+export async function buildExport(doc: Document, analysis: DocumentAnalysis, font: ExportFont, choice: ExportChoice, render = true): Promise<ExportFile> {
+  const figure = () => layoutFigure(analysis.profile, doc, { metrics: font.metrics, preset: choice.preset, theme: choice.theme });
+  const table = (which: 'points' | 'steps') => (which === 'points' ? pointsTable(analysis.profile, doc.settings.decimals) : stepsTable(analysisReport(doc, analysis)));
+  switch (choice.kind) {
+    case 'svg': { const svg = sceneToSvg(figure()); return { data: svg, mimeType: 'image/svg+xml', extension: '.svg', preview: { svg } }; }
+    case 'pdf': {
+      const scene = figure();
+      const svg = sceneToSvg(scene);
+      const data = render ? await sceneToPdf(scene, { fontBytes: font.bytes, title: doc.title || 'Energy profile' }) : new Uint8Array();
+      return { data, mimeType: 'application/pdf', extension: '.pdf', preview: { svg } };
+    }
+    case 'png': {
+      const scene = figure();
+      const svg = sceneToSvg(scene);
+      // The raster needs the font inside the SVG: an image cannot see the page's fonts.
+      const data = render ? await svgToPng(sceneToSvg(scene, { embedFont: font.bytes }), scene.widthMm, scene.heightMm, choice.dpi) : new Uint8Array();
+      return { data, mimeType: 'image/png', extension: '.png', preview: { svg } };
+    }
+    case 'points-csv': case 'steps-csv': { const text = tableToCsv(table(choice.kind === 'points-csv' ? 'points' : 'steps')); return { data: text, mimeType: 'text/csv', extension: '.csv', preview: { text } }; }
+    case 'points-md': case 'steps-md': { const text = tableToMarkdown(table(choice.kind === 'points-md' ? 'points' : 'steps')); return { data: text, mimeType: 'text/markdown', extension: '.md', preview: { text } }; }
+  }
+}

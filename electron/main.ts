@@ -26,6 +26,8 @@ const here = dirname(fileURLToPath(import.meta.url));
 const files = { preload: join(here, 'preload.cjs'), rendererIndex: join(here, '..', '..', 'dist', 'renderer', 'index.html') };
 const appUrl = pathToFileURL(files.rendererIndex).href;
 const log = (message: string) => console.warn(`[passline] ${message}`);
+// A separate data folder on request (end-to-end tests, a portable setup); set before any use.
+if (process.env.PASSLINE_USER_DATA) app.setPath('userData', process.env.PASSLINE_USER_DATA);
 // `electron .` in development puts the app folder before the user's arguments.
 const launcherArgs = app.isPackaged ? 1 : 2;
 

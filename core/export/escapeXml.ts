@@ -7,6 +7,7 @@ const ESCAPES: Record<string, string> = { '&': '&amp;', '<': '&lt;', '>': '&gt;'
 
 /** A number for SVG output: at most 3 decimals, no trailing zeros, no "-0". */
 export function num(value: number): string {
-  const s = value.toFixed(3).replace(/\.?0+$/, '');
-  return s === '-0' ? '0' : s;
+  // k / 1000 prints as its shortest decimal, so this is toFixed(3) without trailing zeros, minus the regex.
+  const r = Math.round(value * 1000) / 1000;
+  return r === 0 ? '0' : String(r);
 }

@@ -3,15 +3,11 @@ import { formatErrors, parseDocument } from '../model/load.ts';
 import type { Document } from '../model/schema.ts';
 import { importTable } from '../import/table.ts';
 import { CliError, type CliIo } from './io.ts';
+import { readText } from './readText.ts';
 
 /** Reads a `.passline` document or a CSV/TSV table of points into a document. */
 export function loadInput(path: string, io: CliIo): Document {
-  let text: string;
-  try {
-    text = io.readFile(path);
-  } catch (error) {
-    throw new CliError(`cannot read ${path}: ${(error as NodeJS.ErrnoException).code ?? (error as Error).message}`);
-  }
+  const text = readText(path, io);
   const ext = extname(path).toLowerCase();
   const looksJson = ext === '.passline' || ext === '.json' || /^\uFEFF?\s*\{/.test(text);
   if (looksJson) {

@@ -2,6 +2,7 @@ import { thermoReport } from '../thermo/thermoReport.ts';
 import { CliError, EXIT_USAGE, type CliIo } from './io.ts';
 import { positiveOption } from './options.ts';
 import { solveLine } from './thermoSolve.ts';
+import { readText } from './readText.ts';
 
 export interface ThermoOptions {
   reaction?: string | undefined;
@@ -17,12 +18,7 @@ const num = (v: number | null, digits: number) => (v === null ? '—' : v.toFixe
 export function runThermo(tablePath: string, options: ThermoOptions, io: CliIo): void {
   if (!options.reaction) throw new CliError('thermo: --reaction "A + B -> C" is required', EXIT_USAGE);
   const temperatureK = positiveOption('temperature', options.temperature, 298.15);
-  let text: string;
-  try {
-    text = io.readFile(tablePath);
-  } catch (error) {
-    throw new CliError(`cannot read ${tablePath}: ${(error as NodeJS.ErrnoException).code ?? (error as Error).message}`);
-  }
+  const text = readText(tablePath, io);
   if (options.solve !== undefined || options.given !== undefined) {
     if (!options.solve || !options.given) throw new CliError('thermo: --solve SPECIES and --given dH=VALUE go together', EXIT_USAGE);
     io.out(solveLine(text, options.reaction, options.solve, options.given));

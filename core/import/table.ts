@@ -2,14 +2,9 @@ import { makeDocument } from '../model/load.ts';
 import type { Document, EnergySpec, Quantity, Unit } from '../model/schema.ts';
 import { parseEnergyUnit } from '../units/energy.ts';
 import { readDelimited, readNumber } from './delimited.ts';
+import type { TableError } from './tableError.ts';
 
-/** A problem in an imported table, located by line and column. */
-export interface TableError {
-  row: number;
-  column: string;
-  value: string;
-  message: string;
-}
+export type { TableError } from './tableError.ts';
 
 export type TableImport = { ok: true; doc: Document } | { ok: false; errors: TableError[] };
 

@@ -2,14 +2,10 @@ import { csvParseRows } from 'd3';
 import { CALORIE_J } from '../units/constants.ts';
 import type { FormationData, FormationKey, FormationValues } from './formationValues.ts';
 
-/** A bad cell of a formation table; row is 1-based (the header is row 1). */
-export interface TableCellError {
-  row: number;
-  /** Header text of the column ("dfH [kJ/mol]"), or its number when there is no header. */
-  column: string;
-  value: string;
-  message: string;
-}
+import type { TableError as TableCellError } from '../import/tableError.ts';
+
+/** A bad cell of a formation table; row is 1-based (the header is row 1). Same shape as a points-table error. */
+export type { TableCellError };
 
 /** A parsed formation table, values converted to kJ/mol and J/(mol K). */
 export interface FormationTable {

@@ -35,6 +35,13 @@ Usage:
       Draw the profile figure: SVG with editable text, vector PDF with the font
       embedded, or PNG at N dots per inch (default 300).
 
+  passline report FILE -o OUT.pdf [--unit U] [--temperature K]
+      A PDF report: the figure, energies with provenance, steps, effective barriers,
+      energetic span, comparisons, settings, methods with sources, findings, cautions.
+
+  passline tables FILE -o OUT.csv|OUT.md [--unit U] [--temperature K]
+      The points and the analysis as CSV or Markdown tables, units in every header.
+
   passline scan FILE [--from K] [--to K] [--count N]
       Rate constants, equilibrium constants, TOFs and product shares over a temperature
       range (default 273.15–373.15 K, 11 values) as CSV; states how G(T) was obtained.

@@ -7,6 +7,7 @@ import { runThermo } from './thermo.ts';
 import { runSimulate } from './simulate.ts';
 import { runRender } from './render.ts';
 import { runScan } from './scan.ts';
+import { runReport, runTables } from './report.ts';
 import { HELP, VERSION } from './help.ts';
 
 /** The real terminal and filesystem. */
@@ -64,6 +65,16 @@ const COMMANDS: Record<string, { options: Record<string, OptionSpec>; run: Comma
     options: { from: { type: 'string' }, to: { type: 'string' }, count: { type: 'string' } },
     args: 1,
     run: ([file], v, io) => runScan(file!, { from: v.from as string | undefined, to: v.to as string | undefined, count: v.count as string | undefined }, io),
+  },
+  report: {
+    options: { output: { type: 'string', short: 'o' }, unit: { type: 'string' }, temperature: { type: 'string' } },
+    args: 1,
+    run: ([file], v, io) => runReport(file!, { output: v.output as string | undefined, unit: v.unit as string | undefined, temperature: v.temperature as string | undefined }, io),
+  },
+  tables: {
+    options: { output: { type: 'string', short: 'o' }, unit: { type: 'string' }, temperature: { type: 'string' } },
+    args: 1,
+    run: ([file], v, io) => runTables(file!, { output: v.output as string | undefined, unit: v.unit as string | undefined, temperature: v.temperature as string | undefined }, io),
   },
 };
 

@@ -161,6 +161,18 @@ describe('passline render', () => {
     expect([...(outputs.get('fig.png') as Uint8Array).slice(0, 8)]).toEqual([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
   });
 
+  it('report writes a PDF; tables writes Markdown and CSV with units in the headers', async () => {
+    expect((await renderRun(['report', 'assets/demo/demo.passline', '-o', 'r.pdf'])).code).toBe(0);
+    expect(new TextDecoder('latin1').decode((outputs.get('r.pdf') as Uint8Array).slice(0, 5))).toBe('%PDF-');
+    expect((await renderRun(['tables', 'assets/demo/demo.passline', '-o', 't.md'])).code).toBe(0);
+    const md = String(outputs.get('t.md'));
+    expect(md).toContain('## Steps');
+    expect(md).toContain('ΔG / kcal mol⁻¹');
+    expect((await renderRun(['tables', 'assets/demo/demo.passline', '-o', 't.csv'])).code).toBe(0);
+    expect(String(outputs.get('t.csv'))).toMatch(/^Energies\r\npathway,point,kind,ΔG \/ kcal mol⁻¹,source\r\n/);
+    expect((await renderRun(['report', 'assets/demo/demo.passline', '-o', 'r.docx'])).code).toBe(2);
+  }, 30_000);
+
   it('bad options are usage errors; an unwritable output is one line with exit 1', async () => {
     expect(await renderRun(['render', 'assets/demo/demo.passline', '-o', 'fig.gif'])).toMatchObject({ code: 2 });
     expect((await renderRun(['render', 'assets/demo/demo.passline', '-o', 'f.png', '--dpi', '5'])).err).toContain('--dpi: expected 36–2400, got 5');

@@ -1,0 +1,34 @@
+import { extname } from 'node:path';
+import { analyseDocument } from '../analysis/analyseDocument.ts';
+import { analysisTables } from '../export/analysisTables.ts';
+import { renderReport } from '../export/renderReport.node.ts';
+import { tablesToCsv, tablesToMarkdown } from '../export/tablesDocument.ts';
+import { analysisReport } from '../report/analysisReport.ts';
+import { CliError, EXIT_USAGE, type CliIo } from './io.ts';
+import { loadInput } from './loadInput.ts';
+import { applySettingOptions } from './options.ts';
+import { readBundledFont } from './fontFile.ts';
+import { writeOutput } from './writeOutput.ts';
+
+export interface ReportCliOptions { output?: string | undefined; unit?: string | undefined; temperature?: string | undefined }
+
+function outputOf(options: ReportCliOptions, allowed: readonly string[], command: string): string {
+  if (!options.output) throw new CliError(`${command}: -o OUT${allowed[0]} is required`, EXIT_USAGE);
+  if (!allowed.includes(extname(options.output).toLowerCase())) throw new CliError(`-o: the output must end in ${allowed.join(' or ')}, got "${options.output}"`, EXIT_USAGE);
+  return options.output;
+}
+
+/** `passline report FILE -o OUT.pdf`: figure, tables, settings, methods, findings and cautions. */
+export async function runReport(file: string, options: ReportCliOptions, io: CliIo): Promise<void> {
+  const output = outputOf(options, ['.pdf'], 'report');
+  const doc = applySettingOptions(loadInput(file, io), options);
+  writeOutput(output, await renderReport(doc, { fontBytes: readBundledFont() }), io);
+}
+
+/** `passline tables FILE -o OUT.csv|OUT.md`: the points and the analysis as tables. */
+export function runTables(file: string, options: ReportCliOptions, io: CliIo): void {
+  const output = outputOf(options, ['.csv', '.md'], 'tables');
+  const doc = applySettingOptions(loadInput(file, io), options);
+  const tables = analysisTables(analysisReport(doc, analyseDocument(doc)), doc.settings.decimals);
+  writeOutput(output, extname(output).toLowerCase() === '.md' ? tablesToMarkdown(tables, doc.title) : tablesToCsv(tables), io);
+}

@@ -55,6 +55,15 @@ describe('sceneToSvg', () => {
     expect(all).toContain('<b onload="x()">A&B</b>');
   });
 
+  it('keeps hostile free-text annotations inert and intact', () => {
+    const hostile = `<img src=x onerror="alert(1)"> & "q" ]]>`;
+    const { doc, profile } = fixture([{ id: 'a', name: 'A', points: [['R', 'min', 0], ['T', 'ts', 12], ['P', 'min', -3]] }],
+      { annotations: [{ type: 'text', text: hostile, x: 1, y: 6 }] });
+    const xml = parseSvg(sceneToSvg(layoutFigure(profile, doc, { metrics })));
+    expect(xml.getElementsByTagName('img')).toHaveLength(0);
+    expect([...xml.getElementsByTagName('text')].map((t) => t.textContent)).toContain(hostile);
+  });
+
   it('embeds the font as a data URL when asked', () => {
     const { doc, profile } = twoPathways();
     const bytes = new Uint8Array([0, 1, 0, 0, 255, 254]);

@@ -50,8 +50,17 @@ function openFromSystem(path: unknown): void {
 }
 
 function send(command: HostCommand): void {
-  if (app.isReady() && !mainWindow) void openWindow();
+  if (app.isReady()) void ensureWindow();
   commands.send(command);
+}
+
+let opening: Promise<void> | null = null;
+
+/** The app's window, opened once however many requests for it arrive while it is being made. */
+function ensureWindow(): Promise<void> {
+  if (mainWindow) return Promise.resolve();
+  opening ??= openWindow().finally(() => { opening = null; });
+  return opening;
 }
 
 function setMenu(): void {
@@ -130,9 +139,9 @@ if (!app.requestSingleInstanceLock()) {
     });
     registerHostIpc(ipcMain, host, (event) => isAppSender(event, appWindowIds, appUrl), log);
     setMenu();
-    await openWindow();
+    await ensureWindow();
     app.on('activate', () => {
-      if (BrowserWindow.getAllWindows().length === 0) void openWindow();
+      if (BrowserWindow.getAllWindows().length === 0) void ensureWindow();
     });
   });
 

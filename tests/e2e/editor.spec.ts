@@ -1,0 +1,140 @@
+// End-to-end checks of the editor in a plain browser: typing and dragging energies, the
+// species sheet, undo/redo, settings, findings, export and a refused file. Expected
+// numbers come from the demo's typed values with the arithmetic spelt out beside them.
+import { expect, test } from '@playwright/test';
+import { readFileSync } from 'node:fs';
+import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
+import { centreY, consoleErrors, dragBy, level, openEditor, pointRow } from './editorHelpers.ts';
+
+const demoText = readFileSync(new URL('../../assets/demo/demo.passline', import.meta.url), 'utf8');
+const CAT = 'Catalysed (LA)';
+
+test.beforeEach(async ({ page }) => { await openEditor(page); });
+test.afterEach(({ page }) => { expect(consoleErrors.get(page)).toEqual([]); });
+
+/** The first value of a pathway's analysis summary: its effective barrier. */
+const summary = (page: import('@playwright/test').Page, name: string) => page.getByLabel(`Summary of ${name}`, { exact: true }).locator('dd').first();
+
+test('the demo opens with its figure, mechanism and analysis', async ({ page }) => {
+  await expect(page.getByRole('table', { name: 'Thermal', exact: true })).toBeVisible();
+  // Thermal route: TS-th typed 31.8 over AE typed 0, so the effective barrier (largest
+  // T_j − I_i, Kozuch & Shaik, Acc. Chem. Res. 44, 101 (2011)) is 31.8 kcal/mol.
+  await expect(summary(page, 'Thermal')).toHaveText(/^31\.8 kcal mol⁻¹/);
+  await expect(level(page, 'TS-th', 'Thermal')).toHaveAccessibleName(/ΔG = 31\.8 kcal mol⁻¹/);
+});
+
+test('typing a barrier re-resolves the point and updates the analysis', async ({ page }) => {
+  // Catalysed route: LA·AE is a step of −4.2 from 0; TS1 a barrier of 21.1 over it. Typing
+  // 25 puts TS1 at −4.2 + 25 = 20.8 and the effective barrier at 20.8 − (−4.2) = 25.0
+  // (TS2: 14.1 + 4.2 = 18.3 and TS3: −2.5 + 14.0 = 11.5 are lower).
+  await expect(summary(page, CAT)).toHaveText(/^21\.1 kcal mol⁻¹/);
+  await page.getByRole('region', { name: `Pathway ${CAT}` }).getByRole('textbox', { name: 'TS1 energy', exact: true }).fill('25');
+  await expect(pointRow(page, CAT, 2).getByRole('cell').nth(4)).toHaveText('20.8');
+  await expect(summary(page, CAT)).toHaveText(/^25\.0 kcal mol⁻¹ \(TS1 over LA·AE\)/);
+  // ΔΔG‡ between the routes: 31.8 − 25.0 = 6.8 kcal/mol.
+  await expect(page.getByRole('list', { name: 'Comparisons' })).toContainText('ΔΔG‡ = 6.8 kcal mol⁻¹');
+});
+
+test('dragging a level up raises its typed energy live, and one undo restores it', async ({ page }) => {
+  const field = page.getByRole('region', { name: `Pathway ${CAT}` }).getByRole('textbox', { name: 'TS2 energy', exact: true });
+  await expect(field).toHaveValue('14.1');
+  await dragBy(page, level(page, 'TS2', CAT), 0, -60);
+  const raised = Number(await field.inputValue());
+  expect(raised).toBeGreaterThan(16);
+  // The TS2 span over LA·AE (−4.2) is now the catalysed effective barrier once above TS1's 21.1.
+  await expect(level(page, 'TS2', CAT)).toHaveAccessibleName(new RegExp(`ΔG = ${raised.toFixed(1)} kcal`));
+  await page.keyboard.press('Control+z');
+  await expect(field).toHaveValue('14.1');
+  await page.getByRole('button', { name: 'Redo' }).click();
+  await expect(field).toHaveValue(String(raised));
+});
+
+test('a TS dragged below its neighbour raises a finding that selects the point', async ({ page }) => {
+  const ts3 = level(page, 'TS3', CAT);
+  const below = (await centreY(level(page, 'LA + LC', CAT))) - (await centreY(ts3)) + 25;
+  await dragBy(page, ts3, 0, below);
+  const findings = page.getByRole('region', { name: /^Findings/ });
+  const link = findings.getByRole('button', { name: `${CAT}, TS3:` }).first();
+  await expect(link).toBeVisible();
+  await expect(findings).toContainText('negative barrier');
+  await level(page, 'TS-th', 'Thermal').click();
+  await expect(ts3).toHaveAttribute('aria-pressed', 'false');
+  await link.click();
+  await expect(ts3).toHaveAttribute('aria-pressed', 'true');
+  await expect(pointRow(page, CAT, 6)).toHaveAttribute('aria-current', 'true');
+});
+
+test('a pasted species block adds rows; a block with a bad cell is refused and the cell named', async ({ page }) => {
+  await page.getByRole('tab', { name: /Species/ }).click();
+  const paste = async (text: string) => page.getByRole('textbox', { name: 'Paste a block as new species' }).evaluate((el, t) => {
+    const data = new DataTransfer();
+    data.setData('text/plain', t);
+    el.dispatchEvent(new ClipboardEvent('paste', { clipboardData: data, bubbles: true, cancelable: true }));
+  }, text);
+  await paste('id\tlabel\tE\tG correction\nla\tLA\t-1205.512\t0.0412\nae\tAE\t-441.207\t0.1533\n');
+  await expect(page.getByRole('textbox', { name: 'Label, row 2', exact: true })).toHaveValue('AE');
+  await expect(page.getByRole('textbox', { name: 'E, row 1', exact: true })).toHaveValue('-1205.512');
+  await expect(page.getByRole('tab', { name: 'Species (2)' })).toBeVisible();
+  await paste('label\tE\nX\t-12.5\nY\tminus three\n');
+  await expect(page.getByRole('list', { name: 'Cells that could not be read' })).toContainText('Row 4, E: expected a number in Eh (got “minus three”)');
+  await expect(page.getByRole('tab', { name: 'Species (2)' })).toBeVisible();
+  await page.keyboard.press('Control+z');
+  await expect(page.getByRole('tab', { name: 'Species (0)' })).toBeVisible();
+});
+
+test('switching unit and quantity re-labels the axis and converts the shown energies', async ({ page }) => {
+  await page.getByRole('group', { name: 'Document settings' }).getByRole('combobox', { name: 'Unit' }).selectOption('kJ/mol');
+  await expect(page.getByRole('group', { name: 'Document settings' })).toContainText('Axis: ΔG / kJ mol⁻¹');
+  // 31.8 kcal/mol × 4.184 kJ/kcal (thermochemical calorie, NIST SP 811 App. B) = 133.05 kJ/mol.
+  await expect(pointRow(page, 'Thermal', 1).getByRole('cell').nth(4)).toHaveText('133.1');
+  await expect(page.getByRole('table', { name: 'Thermal', exact: true }).getByRole('columnheader', { name: 'ΔG / kJ mol⁻¹' })).toBeVisible();
+  await page.getByRole('group', { name: 'Document settings' }).getByRole('combobox', { name: 'Quantity' }).selectOption('H');
+  await expect(page.getByRole('group', { name: 'Document settings' })).toContainText('Axis: ΔH / kJ mol⁻¹');
+  await expect(page.locator('svg.scene text', { hasText: 'ΔH' })).toHaveCount(1);
+  // The typed value keeps its own unit: the field still reads 31.8 (kcal/mol).
+  await expect(page.getByRole('textbox', { name: 'TS-th energy', exact: true })).toHaveValue('31.8');
+});
+
+test('export writes an SVG and a PDF with the figure labels', async ({ page }) => {
+  await page.getByRole('button', { name: 'Export…' }).click();
+  const dialog = page.getByRole('dialog', { name: 'Export' });
+  await expect(dialog.getByRole('img', { name: 'Preview of the exported figure' })).toBeVisible();
+  let download = page.waitForEvent('download');
+  await dialog.getByRole('button', { name: 'Save export…' }).click();
+  const svg = readFileSync(await (await download).path(), 'utf8');
+  expect(svg).toMatch(/^<\?xml/);
+  expect(svg).toContain('width="175mm"');
+  expect(svg).toContain('TS-th');
+  expect(svg).toContain('ΔG / kcal mol⁻¹');
+
+  await page.getByRole('button', { name: 'Export…' }).click();
+  await dialog.getByRole('combobox', { name: 'What' }).selectOption('pdf');
+  await dialog.getByRole('combobox', { name: 'Size' }).selectOption('single');
+  download = page.waitForEvent('download');
+  await dialog.getByRole('button', { name: 'Save export…' }).click();
+  const file = await download;
+  expect(file.suggestedFilename()).toBe('demo.pdf');
+  const bytes = new Uint8Array(readFileSync(await file.path()));
+  const pdf = await getDocument({ data: bytes, useSystemFonts: false, disableFontFace: true, verbosity: 0 }).promise;
+  const first = await pdf.getPage(1);
+  const [, , w] = first.view;
+  // Single-column preset 85 mm = 85 / 25.4 × 72 pt = 240.9 pt.
+  expect(w).toBeCloseTo((85 / 25.4) * 72, 0);
+  const text = (await first.getTextContent()).items.map((i) => ('str' in i ? i.str : '')).join(' ');
+  expect(text).toContain('TS1');
+  expect(text).toContain('LA·LC');
+});
+
+test('a dropped file of a newer format is refused with a message and the document stays', async ({ page }) => {
+  const newer = { ...JSON.parse(demoText), version: 99, title: 'From the future' };
+  await page.evaluate((text) => {
+    const data = new DataTransfer();
+    data.items.add(new File([text], 'future.passline', { type: 'application/json' }));
+    window.dispatchEvent(new DragEvent('drop', { dataTransfer: data, bubbles: true, cancelable: true }));
+  }, JSON.stringify(newer));
+  const alert = page.getByRole('alert');
+  await expect(alert).toContainText('future.passline could not be opened');
+  await expect(alert).toContainText('format version 99');
+  await expect(page.getByRole('heading', { level: 1 })).not.toHaveText('From the future');
+  await expect(page.getByRole('table', { name: 'Thermal', exact: true })).toBeVisible();
+});

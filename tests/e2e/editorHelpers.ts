@@ -1,0 +1,49 @@
+// Shared steps for the editor's end-to-end tests (browser host, built renderer).
+import { expect, type Page } from '@playwright/test';
+
+/** Console errors (CSP violations included) seen on a page; each test expects none. */
+export const consoleErrors = new WeakMap<object, string[]>();
+
+/** Opens the app with the download route of the browser host and waits for the canvas. */
+export async function openEditor(page: Page): Promise<void> {
+  const errors: string[] = [];
+  consoleErrors.set(page, errors);
+  page.on('console', (message) => { if (message.type() === 'error') errors.push(message.text()); });
+  page.on('pageerror', (error) => errors.push(error.message));
+  await page.addInitScript(() => { delete (window as { showSaveFilePicker?: unknown }).showSaveFilePicker; });
+  await page.setViewportSize({ width: 1600, height: 1000 });
+  await page.goto('/');
+  await expect(page.getByRole('group', { name: 'Levels of the figure' })).toBeVisible();
+}
+
+/** The invisible, focusable hit target over a drawn level, found by the point's label and pathway. */
+export function level(page: Page, label: string, pathway: string) {
+  return page.getByRole('button', { name: new RegExp(`^${escape(label)} \\((minimum|transition state), ${escape(pathway)}\\):`) });
+}
+
+/** The mechanism table row of a point. */
+export function pointRow(page: Page, pathway: string, index: number) {
+  return page.getByRole('table', { name: pathway, exact: true }).getByRole('row').nth(index + 1);
+}
+
+/** Drags the pointer from the centre of a locator by (dx, dy) px in small moves. */
+export async function dragBy(page: Page, target: ReturnType<Page['locator']>, dx: number, dy: number): Promise<void> {
+  const box = await target.boundingBox();
+  if (!box) throw new Error('nothing to drag');
+  const x = box.x + box.width / 2, y = box.y + box.height / 2;
+  await page.mouse.move(x, y);
+  await page.mouse.down();
+  await page.mouse.move(x + dx, y + dy, { steps: 12 });
+  await page.mouse.up();
+}
+
+/** Vertical page centre (px) of a locator. */
+export async function centreY(target: ReturnType<Page['locator']>): Promise<number> {
+  const box = await target.boundingBox();
+  if (!box) throw new Error('not on screen');
+  return box.y + box.height / 2;
+}
+
+function escape(text: string): string {
+  return text.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
+}

@@ -11,7 +11,7 @@ export default defineConfig({
   testMatch: '**/*.spec.ts',
   timeout: 30_000,
   workers: 2,
-  reporter: [['list'], ['json', { outputFile: 'test-results/playwright.json' }]],
+  reporter: [['list'], ['json', { outputFile: 'reports/playwright.json' }]],
   use: {
     browserName: 'chromium',
     baseURL: 'http://127.0.0.1:4173',

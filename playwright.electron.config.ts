@@ -8,5 +8,6 @@ export default defineConfig({
   testMatch: '**/*.spec.ts',
   timeout: 60_000,
   workers: 1,
-  reporter: [['list'], ['json', { outputFile: 'test-results/playwright-electron.json' }]],
+  reporter: [['list'], ['json', { outputFile: 'reports/playwright-electron.json' }]],
+  outputDir: 'test-results/electron',
 });

@@ -22,6 +22,6 @@ export default defineConfig({
         },
       },
     ],
-    reporters: ['default', ['json', { outputFile: 'test-results/vitest.json' }]],
+    reporters: ['default', ['json', { outputFile: 'reports/vitest.json' }]],
   },
 });

@@ -7,6 +7,8 @@ export type SceneElement =
   | { type: 'path'; d: string; fill: string; stroke?: Stroke; role: Role | 'background'; pathway?: string; point?: string }
   | { type: 'text'; item: TextItem };
 
+const memo = new WeakMap<object, SceneElement>();
+
 const n = (v: number) => String(Math.round(v * 1000) / 1000);
 
 /**
@@ -16,6 +18,13 @@ const n = (v: number) => String(Math.round(v * 1000) / 1000);
  */
 export function sceneElements(scene: Scene): SceneElement[] {
   const out: SceneElement[] = [];
+  // Items that did not change (same object) keep their element, so Svelte skips them.
+  const remembered = (item: Scene['items'][number] | undefined, make: () => SceneElement) => {
+    if (!item) return make();
+    let el = memo.get(item);
+    if (!el) { el = make(); memo.set(item, el); }
+    return el;
+  };
   const items = scene.items;
   // drawScene paints the background first (when there is one), then items in order.
   let index = scene.background ? -1 : 0;
@@ -28,15 +37,16 @@ export function sceneElements(scene: Scene): SceneElement[] {
     paint(stroke, fill) {
       const item = index >= 0 ? items[index] : undefined;
       const owner = item && item.kind === 'path' ? item : undefined;
-      out.push({
-        type: 'path', d, fill: fill ?? 'none', role: owner?.role ?? 'background',
+      const path = d;
+      out.push(remembered(item, () => ({
+        type: 'path', d: path, fill: fill ?? 'none', role: owner?.role ?? 'background',
         ...(stroke ? { stroke } : {}), ...(owner?.pathway ? { pathway: owner.pathway } : {}), ...(owner?.point ? { point: owner.point } : {}),
-      });
+      })));
       d = '';
       index++;
     },
     text(item) {
-      out.push({ type: 'text', item });
+      out.push(remembered(item, () => ({ type: 'text', item })));
       index++;
     },
   };

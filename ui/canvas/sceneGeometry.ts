@@ -19,6 +19,9 @@ export interface SceneGeometry {
   mmPerSlot: number;
 }
 
+// Unchanged bars keep their box object, so the canvas re-renders only levels that moved.
+const boxes = new WeakMap<object, LevelBox>();
+
 export const levelKey = (pathway: string, point: string) => `${pathway}\u0000${point}`;
 
 /**
@@ -34,7 +37,9 @@ export function sceneGeometry(scene: Scene, profile: ResolvedProfile, slots: Rea
     if (item.kind !== 'path' || item.role !== 'level' || !item.pathway || !item.point) continue;
     const [a, b] = item.segments;
     if (a?.op !== 'M' || b?.op !== 'L') continue;
-    levels.push({ pathway: item.pathway, point: item.point, x1: Math.min(a.x, b.x), x2: Math.max(a.x, b.x), y: a.y });
+    let box = boxes.get(item);
+    if (!box) { box = { pathway: item.pathway, point: item.point, x1: Math.min(a.x, b.x), x2: Math.max(a.x, b.x), y: a.y }; boxes.set(item, box); }
+    levels.push(box);
   }
   let lo: LevelBox | undefined, hi: LevelBox | undefined;
   let first: LevelBox | undefined, far: LevelBox | undefined;

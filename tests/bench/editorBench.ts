@@ -1,0 +1,104 @@
+/**
+ * Editor timings in headless Chromium (npx vite build && npx tsx tests/bench/editorBench.ts):
+ * with a document of 10 pathways × 50 points, the time from a pointer move to the painted
+ * frame while dragging a level (issue 6 target: p95 < 16 ms, one 60 Hz frame), measured by
+ * the app itself with the Performance API (ui/canvas/frameTiming.ts), and the time from
+ * load to an interactive canvas (target < 2 s). Prints numbers; not a test.
+ */
+import { chromium } from '@playwright/test';
+import { spawn } from 'node:child_process';
+import { existsSync } from 'node:fs';
+import { serializeDocument, makeDocument } from '../../core/model/load.ts';
+
+const PORT = 4176;
+const URL_ = `http://127.0.0.1:${PORT}/`;
+
+// Invented profiles: a deterministic zig-zag per pathway, offset a little per pathway.
+function bigDocument(): string {
+  return serializeDocument(makeDocument({
+    title: 'Bench (invented): 10 pathways × 50 points',
+    pathways: Array.from({ length: 10 }, (_, p) => ({
+      id: `p${p}`, name: `pathway ${p + 1}`,
+      points: Array.from({ length: 50 }, (_, i) => ({
+        id: `p${p}-${i}`, label: i % 2 ? `TS${i}` : `I${i}`, kind: (i % 2 ? 'ts' : 'min') as 'ts' | 'min',
+        energy: { mode: 'value' as const, value: Number(((i % 2 ? 15 : -2) + 6 * Math.sin(i * 0.7 + p) + p * 0.3).toFixed(1)), unit: 'kcal/mol' as const },
+      })),
+    })),
+  }));
+}
+
+const quantile = (xs: number[], q: number) => { const s = [...xs].sort((a, b) => a - b); return s[Math.min(s.length - 1, Math.floor(q * s.length))] ?? NaN; };
+
+async function waitForServer(): Promise<void> {
+  for (let i = 0; i < 100; i++) {
+    try { if ((await fetch(URL_)).ok) return; } catch { /* not up yet */ }
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  throw new Error(`vite preview did not answer on ${URL_}`);
+}
+
+async function main(): Promise<void> {
+  if (!existsSync('dist/renderer/index.html')) throw new Error('build the renderer first: npx vite build');
+  const server = spawn('npx', ['vite', 'preview', '--host', '127.0.0.1', '--port', String(PORT), '--strictPort', '--bypass-lock'], { stdio: ['ignore', 'ignore', 'inherit'], detached: true });
+  try {
+    await waitForServer();
+    const browser = await chromium.launch({
+      executablePath: existsSync('/usr/bin/chromium') ? '/usr/bin/chromium' : undefined,
+      args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run'],
+    });
+    const page = await browser.newPage({ viewport: { width: 1600, height: 1000 } });
+    const start = Date.now();
+    await page.goto(URL_);
+    await page.getByRole('group', { name: 'Levels of the figure' }).getByRole('button').first().waitFor();
+    const demoReady = Date.now() - start;
+
+    // Open the big document the way a user drops a file, and time until its 500 levels can be picked.
+    const text = bigDocument();
+    const openMs = await page.evaluate(async (t) => {
+      const t0 = performance.now();
+      const data = new DataTransfer();
+      data.items.add(new File([t], 'bench.passline', { type: 'application/json' }));
+      window.dispatchEvent(new DragEvent('drop', { dataTransfer: data, bubbles: true, cancelable: true }));
+      for (;;) {
+        await new Promise((r) => requestAnimationFrame(() => setTimeout(r, 0)));
+        if (document.querySelectorAll('svg.overlay rect.hit').length >= 500) return performance.now() - t0;
+      }
+    }, text);
+
+    if (process.env.HIDE) await page.getByRole('tab', { name: /Species/ }).click();
+    const target = page.locator('svg.overlay rect.hit[data-point="p4-25"]');
+    const box = await target.boundingBox();
+    if (!box) throw new Error('bench level not on screen');
+    await page.evaluate(() => performance.clearMeasures('passline:drag-frame'));
+    const x = box.x + box.width / 2, y = box.y + box.height / 2;
+    await page.mouse.move(x, y);
+    await page.mouse.down();
+    const cdp = process.env.PROFILE ? await page.context().newCDPSession(page) : null;
+    if (cdp) { await cdp.send('Profiler.enable'); await cdp.send('Profiler.start'); }
+    for (let i = 1; i <= 120; i++) {
+      await page.mouse.move(x, y - 8 - ((i * 3) % 90));
+      await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => setTimeout(r, 0))));
+    }
+    if (cdp) {
+      const { profile } = await cdp.send('Profiler.stop') as { profile: { nodes: { id: number; callFrame: { functionName: string; url: string; lineNumber: number }; hitCount?: number }[] } };
+      const self = new Map<string, number>();
+      for (const n of profile.nodes) { const k = `${n.callFrame.functionName || '(anon)'} ${n.callFrame.url.split('/').pop()}:${n.callFrame.lineNumber}`; self.set(k, (self.get(k) ?? 0) + (n.hitCount ?? 0)); }
+      console.log([...self].sort((a, b) => b[1] - a[1]).slice(0, 25).map(([k, v]) => `${v}\t${k}`).join('\n'));
+    }
+    await page.mouse.up();
+    await page.waitForTimeout(200);
+    const frames = await page.evaluate(() => performance.getEntriesByName('passline:drag-frame').map((e) => e.duration));
+    await browser.close();
+
+    console.log('Editor benchmark (headless Chromium, 10 pathways × 50 points)');
+    console.log(`  load to interactive canvas (demo):              ${demoReady} ms`);
+    console.log(`  open 10×50 document to interactive canvas:      ${openMs.toFixed(0)} ms   (target < 2000 ms)`);
+    console.log(`  drag frames measured:                           ${frames.length}`);
+    console.log(`  pointer move → painted frame, median:           ${quantile(frames, 0.5).toFixed(1)} ms`);
+    console.log(`  pointer move → painted frame, p95:              ${quantile(frames, 0.95).toFixed(1)} ms   (target < 16 ms)`);
+  } finally {
+    try { if (server.pid) process.kill(-server.pid); } catch { /* already gone */ }
+  }
+}
+
+await main();

@@ -1,0 +1,57 @@
+import type { PathItem, Scene, SceneItem, Segment } from '../../core/figure/scene.ts';
+
+const EPS = 1e-6;
+
+/** A level being moved on screen before the document catches up. */
+export interface LevelShift {
+  pathway: string;
+  point: string;
+  /** Vertical travel on the page, mm (down is positive). */
+  dyMm: number;
+}
+
+function moveEnds(item: PathItem, y: number, xs: readonly number[], dy: number): PathItem {
+  const segs = item.segments;
+  const first = segs[0], last = segs.at(-1);
+  const on = (s: Segment | undefined) => s !== undefined && s.op !== 'Z' && Math.abs(s.y - y) < EPS && xs.some((x) => Math.abs(s.x - x) < EPS);
+  const start = on(first), end = on(last);
+  if (!start && !end) return item;
+  const out = segs.map((s) => ({ ...s })) as Segment[];
+  const firstCurve = out.findIndex((s) => s.op === 'C');
+  let lastCurve = -1;
+  out.forEach((s, i) => { if (s.op === 'C') lastCurve = i; });
+  if (start) {
+    (out[0] as { y: number }).y += dy;
+    const c = out[firstCurve];
+    if (c?.op === 'C' && Math.abs(c.y1 - y) < EPS) c.y1 += dy;
+  }
+  if (end) {
+    (out[out.length - 1] as { y: number }).y += dy;
+    const c = out[lastCurve];
+    if (c?.op === 'C' && Math.abs(c.y2 - y) < EPS) c.y2 += dy;
+  }
+  return { ...item, segments: out };
+}
+
+function translate(item: SceneItem, dy: number): SceneItem {
+  if (item.kind === 'text') return { ...item, y: item.y + dy, box: { ...item.box, y: item.box.y + dy } };
+  return { ...item, segments: item.segments.map((s) => (s.op === 'Z' ? s : s.op === 'C' ? { ...s, y1: s.y1 + dy, y2: s.y2 + dy, y: s.y + dy } : { ...s, y: s.y + dy })) };
+}
+
+/**
+ * The scene with one level, its label and the ends of the connectors that meet it moved
+ * by `dyMm`; every other item keeps its identity, so redrawing costs only what moved.
+ * Used while a drag outruns a full layout of a large document.
+ */
+export function shiftLevel(scene: Scene, shift: LevelShift): Scene {
+  const bar = scene.items.find((i): i is PathItem => i.kind === 'path' && i.role === 'level' && i.pathway === shift.pathway && i.point === shift.point);
+  const [a, b] = bar?.segments ?? [];
+  if (!bar || a?.op !== 'M' || b?.op !== 'L' || shift.dyMm === 0) return scene;
+  const xs = [a.x, b.x, (a.x + b.x) / 2];
+  const items = scene.items.map((item) => {
+    if (item.pathway !== shift.pathway) return item;
+    if (item.point === shift.point) return translate(item, shift.dyMm);
+    return item.kind === 'path' && item.role === 'connector' ? moveEnds(item, a.y, xs, shift.dyMm) : item;
+  });
+  return { ...scene, items };
+}

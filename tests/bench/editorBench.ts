@@ -73,21 +73,27 @@ async function main(): Promise<void> {
     const x = box.x + box.width / 2, y = box.y + box.height / 2;
     await page.mouse.move(x, y);
     await page.mouse.down();
-    const cdp = process.env.PROFILE ? await page.context().newCDPSession(page) : null;
-    if (cdp) { await cdp.send('Profiler.enable'); await cdp.send('Profiler.start'); }
+    if (process.env.TRACE) await browser.startTracing(page, { path: '/tmp/editor-trace.json', categories: ['devtools.timeline', 'disabled-by-default-devtools.timeline'] });
     for (let i = 1; i <= 120; i++) {
       await page.mouse.move(x, y - 8 - ((i * 3) % 90));
       await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => setTimeout(r, 0))));
     }
-    if (cdp) {
-      const { profile } = await cdp.send('Profiler.stop') as { profile: { nodes: { id: number; callFrame: { functionName: string; url: string; lineNumber: number }; hitCount?: number }[] } };
-      const self = new Map<string, number>();
-      for (const n of profile.nodes) { const k = `${n.callFrame.functionName || '(anon)'} ${n.callFrame.url.split('/').pop()}:${n.callFrame.lineNumber}`; self.set(k, (self.get(k) ?? 0) + (n.hitCount ?? 0)); }
-      console.log([...self].sort((a, b) => b[1] - a[1]).slice(0, 25).map(([k, v]) => `${v}\t${k}`).join('\n'));
-    }
+    if (process.env.TRACE) await browser.stopTracing();
     await page.mouse.up();
     await page.waitForTimeout(200);
     const frames = await page.evaluate(() => performance.getEntriesByName('passline:drag-frame').map((e) => e.duration));
+    const work = await page.evaluate(() => performance.getEntriesByName('passline:drag-work').map((e) => e.duration));
+    const idle = await page.evaluate(async () => {
+      // The floor of the frame measure: the wait for the next frame with no work at all.
+      const out: number[] = [];
+      for (let i = 0; i < 60; i++) {
+        const t0 = performance.now();
+        await new Promise<void>((r) => requestAnimationFrame(() => { const c = new MessageChannel(); c.port1.onmessage = () => r(); c.port2.postMessage(0); }));
+        out.push(performance.now() - t0);
+        await new Promise((r) => setTimeout(r, 3));
+      }
+      return out;
+    });
     await browser.close();
 
     console.log('Editor benchmark (headless Chromium, 10 pathways × 50 points)');
@@ -96,6 +102,8 @@ async function main(): Promise<void> {
     console.log(`  drag frames measured:                           ${frames.length}`);
     console.log(`  pointer move → painted frame, median:           ${quantile(frames, 0.5).toFixed(1)} ms`);
     console.log(`  pointer move → painted frame, p95:              ${quantile(frames, 0.95).toFixed(1)} ms   (target < 16 ms)`);
+    console.log(`  same measure with no work (frame wait floor):   median ${quantile(idle, 0.5).toFixed(1)} ms, p95 ${quantile(idle, 0.95).toFixed(1)} ms`);
+    console.log(`  main-thread work per move (${work.length} moves shown ahead):  median ${quantile(work, 0.5).toFixed(1)} ms, p95 ${quantile(work, 0.95).toFixed(1)} ms`);
   } finally {
     try { if (server.pid) process.kill(-server.pid); } catch { /* already gone */ }
   }

@@ -21,3 +21,13 @@ export function markFrame(start = performance.now()): void {
     channel.port2.postMessage(0);
   });
 }
+
+/** Name of the measure of the main-thread work one pointer move causes (handler and DOM update). */
+export const DRAG_WORK_MEASURE = 'passline:drag-work';
+
+/** Records the work of one pointer move, from `start` until now. */
+export function markWork(start: number): void {
+  if (typeof performance === 'undefined') return;
+  performance.measure(DRAG_WORK_MEASURE, { start, end: performance.now() });
+  if (performance.getEntriesByName(DRAG_WORK_MEASURE).length > 2000) performance.clearMeasures(DRAG_WORK_MEASURE);
+}

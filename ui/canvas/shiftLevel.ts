@@ -10,13 +10,15 @@ export interface LevelShift {
   dyMm: number;
 }
 
-function moveEnds(item: PathItem, y: number, xs: readonly number[], dy: number): PathItem {
-  const segs = item.segments;
-  const first = segs[0], last = segs.at(-1);
+function touches(item: PathItem, y: number, xs: readonly number[]): { start: boolean; end: boolean } {
   const on = (s: Segment | undefined) => s !== undefined && s.op !== 'Z' && Math.abs(s.y - y) < EPS && xs.some((x) => Math.abs(s.x - x) < EPS);
-  const start = on(first), end = on(last);
+  return { start: on(item.segments[0]), end: on(item.segments.at(-1)) };
+}
+
+function moveEnds(item: PathItem, y: number, xs: readonly number[], dy: number): PathItem {
+  const { start, end } = touches(item, y, xs);
   if (!start && !end) return item;
-  const out = segs.map((s) => ({ ...s })) as Segment[];
+  const out = item.segments.map((s) => ({ ...s })) as Segment[];
   const firstCurve = out.findIndex((s) => s.op === 'C');
   let lastCurve = -1;
   out.forEach((s, i) => { if (s.op === 'C') lastCurve = i; });
@@ -38,20 +40,40 @@ function translate(item: SceneItem, dy: number): SceneItem {
   return { ...item, segments: item.segments.map((s) => (s.op === 'Z' ? s : s.op === 'C' ? { ...s, y1: s.y1 + dy, y2: s.y2 + dy, y: s.y + dy } : { ...s, y: s.y + dy })) };
 }
 
+function barOf(scene: Scene, pathway: string, point: string) {
+  const bar = scene.items.find((i): i is PathItem => i.kind === 'path' && i.role === 'level' && i.pathway === pathway && i.point === point);
+  const [a, b] = bar?.segments ?? [];
+  return bar && a?.op === 'M' && b?.op === 'L' ? { y: a.y, xs: [a.x, b.x, (a.x + b.x) / 2] } : null;
+}
+
+/**
+ * Splits a scene into what stays put and what moves when one level is dragged: the level,
+ * its label and leader, and the connectors that meet it. Drawing the moving part on its
+ * own layer keeps a drag from repainting the whole figure.
+ */
+export function splitScene(scene: Scene, pathway: string, point: string): { still: Scene; moving: Scene } {
+  const bar = barOf(scene, pathway, point);
+  if (!bar) return { still: scene, moving: { ...scene, background: null, items: [] } };
+  const moves = (item: SceneItem) => item.pathway === pathway && (item.point === point
+    || (item.kind === 'path' && item.role === 'connector' && Object.values(touches(item, bar.y, bar.xs)).some(Boolean)));
+  return {
+    still: { ...scene, items: scene.items.filter((i) => !moves(i)) },
+    moving: { ...scene, background: null, items: scene.items.filter(moves) },
+  };
+}
+
 /**
  * The scene with one level, its label and the ends of the connectors that meet it moved
  * by `dyMm`; every other item keeps its identity, so redrawing costs only what moved.
  * Used while a drag outruns a full layout of a large document.
  */
 export function shiftLevel(scene: Scene, shift: LevelShift): Scene {
-  const bar = scene.items.find((i): i is PathItem => i.kind === 'path' && i.role === 'level' && i.pathway === shift.pathway && i.point === shift.point);
-  const [a, b] = bar?.segments ?? [];
-  if (!bar || a?.op !== 'M' || b?.op !== 'L' || shift.dyMm === 0) return scene;
-  const xs = [a.x, b.x, (a.x + b.x) / 2];
+  const bar = barOf(scene, shift.pathway, shift.point);
+  if (!bar || shift.dyMm === 0) return scene;
   const items = scene.items.map((item) => {
     if (item.pathway !== shift.pathway) return item;
     if (item.point === shift.point) return translate(item, shift.dyMm);
-    return item.kind === 'path' && item.role === 'connector' ? moveEnds(item, a.y, xs, shift.dyMm) : item;
+    return item.kind === 'path' && item.role === 'connector' ? moveEnds(item, bar.y, bar.xs, shift.dyMm) : item;
   });
   return { ...scene, items };
 }

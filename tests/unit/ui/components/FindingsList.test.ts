@@ -1,5 +1,5 @@
-import { describe, expect, it } from 'vitest';
-import { render, screen } from '@testing-library/svelte';
+import { describe, expect, it, vi } from 'vitest';
+import { fireEvent, render, screen } from '@testing-library/svelte';
 import FindingsList from '../../../../ui/components/FindingsList.svelte';
 import type { ResolvedPathway } from '../../../../core/profile/types.ts';
 
@@ -25,5 +25,15 @@ describe('FindingsList', () => {
   it('shows nothing when there are no findings', () => {
     render(FindingsList, { pathways, findings: [] });
     expect(screen.queryByRole('list')).toBeNull();
+  });
+
+  it('picking a finding about a point selects that point', async () => {
+    const onselect = vi.fn();
+    render(FindingsList, {
+      pathways, onselect,
+      findings: [{ severity: 'error', code: 'ts-below-neighbour', message: 'lies below a neighbouring minimum', pathway: 'cat', point: 'ts1' }],
+    });
+    await fireEvent.click(screen.getByRole('button', { name: 'Catalysed, TS1:' }));
+    expect(onselect).toHaveBeenCalledWith('cat', 'ts1');
   });
 });

@@ -33,8 +33,8 @@ export class DocumentStore {
   status = $state('');
   busy = $state(false);
   selection: Selection | null = $state.raw(null);
-  /** The document as last opened or saved, to tell whether there are unsaved changes. */
-  saved: Document;
+  /** The document as last opened or saved, to tell whether there are unsaved changes (null: never saved as shown, e.g. a restored copy). */
+  saved: Document | null;
   readonly doc: Document;
   /** Everything core computes from the document (energies J/mol). */
   readonly analysis: DocumentAnalysis;
@@ -46,7 +46,7 @@ export class DocumentStore {
   constructor(host: HostApi, initial: Document, fileName: string) {
     this.#host = host;
     this.history = $state.raw(startHistory(initial));
-    this.saved = $state.raw(initial);
+    this.saved = $state.raw<Document | null>(initial);
     this.fileName = $state(fileName);
     this.doc = $derived(this.history.present);
     this.analysis = $derived(analyseDocument(this.doc));
@@ -81,10 +81,10 @@ export class DocumentStore {
     this.status = 'Redone.';
   }
 
-  /** Starts over with `doc` (a new or opened document): fresh history, nothing unsaved. */
-  replace(doc: Document, fileName: string, filePath?: string): void {
+  /** Starts over with `doc` (a new or opened document): fresh history, nothing unsaved unless `unsaved` (a restored working copy). */
+  replace(doc: Document, fileName: string, filePath?: string, unsaved = false): void {
     this.history = startHistory(doc);
-    this.saved = doc;
+    this.saved = unsaved ? null : doc;
     this.fileName = fileName;
     this.filePath = filePath;
     this.selection = null;
@@ -115,14 +115,32 @@ export class DocumentStore {
     }, 'open');
   }
 
+  /** Opens a file the user chose outside the window (recent list, command line, system). */
+  async openKnown(path: string): Promise<void> {
+    await this.#run(async () => {
+      const file = await this.#host.openKnownFile(path);
+      if (!file) return void (this.status = 'Open cancelled.');
+      this.openText(file.name, file.text, file.path);
+    }, 'open');
+  }
+
+  /** Opens a file dropped on the window, through the host (so the desktop knows its path). */
+  async openDropped(dropped: File): Promise<void> {
+    await this.#run(async () => {
+      const file = await this.#host.openDroppedFile(dropped);
+      if (!file) return void (this.status = 'Open cancelled.');
+      this.openText(file.name, file.text, file.path);
+    }, 'open');
+  }
+
   /** Saves under a name and place the user picks. */
-  async saveAs(): Promise<void> {
-    await this.#save(undefined);
+  async saveAs(): Promise<boolean> {
+    return this.#save(undefined);
   }
 
   /** Saves back to the file it came from when the host can, else asks like "save as". */
-  async save(): Promise<void> {
-    await this.#save(this.filePath);
+  async save(): Promise<boolean> {
+    return this.#save(this.filePath);
   }
 
   /** Hands an exported figure or table to the host (the user picks where it goes). */
@@ -142,7 +160,8 @@ export class DocumentStore {
     this.problem = null;
   }
 
-  async #save(path: string | undefined): Promise<void> {
+  async #save(path: string | undefined): Promise<boolean> {
+    let done = false;
     await this.#run(async () => {
       const doc = this.doc;
       const suggestedName = suggestFileName(this.fileName, doc.title, DOCUMENT_EXTENSION);
@@ -153,7 +172,9 @@ export class DocumentStore {
       this.fileName = saved.name;
       this.filePath = saved.path;
       this.status = `Saved ${saved.name}.`;
+      done = true;
     }, 'save');
+    return done;
   }
 
   async #run(task: () => Promise<void>, verb: string): Promise<void> {

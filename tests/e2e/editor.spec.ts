@@ -125,6 +125,21 @@ test('export writes an SVG and a PDF with the figure labels', async ({ page }) =
   expect(text).toContain('LA·LC');
 });
 
+test('export writes a PNG at the chosen resolution', async ({ page }) => {
+  await page.getByRole('button', { name: 'Export…' }).click();
+  const dialog = page.getByRole('dialog', { name: 'Export' });
+  await dialog.getByRole('combobox', { name: 'What' }).selectOption('png');
+  await dialog.getByRole('combobox', { name: 'Resolution' }).selectOption('300');
+  const download = page.waitForEvent('download');
+  await dialog.getByRole('button', { name: 'Save export…' }).click();
+  const png = readFileSync(await (await download).path());
+  // PNG signature and IHDR width/height (ISO/IEC 15948 §5.2, §11.2.2).
+  expect([...png.subarray(0, 8)]).toEqual([137, 80, 78, 71, 13, 10, 26, 10]);
+  // Two-column preset 175 mm at 300 dpi: 175 / 25.4 × 300 = 2066.9 → 2067 px.
+  expect(png.readUInt32BE(16)).toBe(2067);
+  expect(png.readUInt32BE(20)).toBeGreaterThan(1000);
+});
+
 test('a dropped file of a newer format is refused with a message and the document stays', async ({ page }) => {
   const newer = { ...JSON.parse(demoText), version: 99, title: 'From the future' };
   await page.evaluate((text) => {

@@ -7,3 +7,4 @@ export { addSpecies, deleteSpecies, speciesUsers, setSpeciesCell, pasteSpecies, 
 export { SPECIES_COLUMNS, speciesRow, columnByName, type SpeciesColumn, type SpeciesColumnKey, type SpeciesRow } from './speciesColumns.ts';
 export { startHistory, record, undo, redo, closeGroup, HISTORY_LIMIT, type History, type RecordOptions } from './history.ts';
 export { uniqueId } from './uniqueId.ts';
+export { addComparison, removeComparison } from './comparisonEdits.ts';

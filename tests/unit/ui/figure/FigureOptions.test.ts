@@ -1,0 +1,28 @@
+import { describe, expect, it } from 'vitest';
+import { fireEvent, render, screen } from '@testing-library/svelte';
+import FigureOptions from '../../../../ui/figure/FigureOptions.svelte';
+import { routeStore } from '../editor/storeFixture.ts';
+
+describe('FigureOptions', () => {
+  it('edits the title and the figure settings, each as an undoable step', async () => {
+    const store = routeStore();
+    render(FigureOptions, { store });
+    await fireEvent.input(screen.getByRole('textbox', { name: 'Title' }), { target: { value: 'Renamed' } });
+    await fireEvent.change(screen.getByRole('combobox', { name: 'Connectors' }), { target: { value: 'curve' } });
+    await fireEvent.click(screen.getByRole('checkbox', { name: 'legend' }));
+    expect(store.doc.title).toBe('Renamed');
+    expect(store.doc.figure).toMatchObject({ connector: 'curve', showLegend: false });
+    store.undo();
+    expect(store.doc.figure.showLegend).toBe(true);
+  });
+
+  it('refuses a font size of zero in place', async () => {
+    const store = routeStore();
+    render(FigureOptions, { store });
+    const field = screen.getByRole('textbox', { name: 'Font size' });
+    await fireEvent.focus(field);
+    await fireEvent.input(field, { target: { value: '0' } });
+    expect(screen.getByRole('alert').textContent).toBe('expected a positive number');
+    expect(store.doc.figure.fontSizePt).toBe(8);
+  });
+});

@@ -49,6 +49,36 @@ test('dragging a level up raises its typed energy live, and one undo restores it
   await expect(field).toHaveValue(String(raised));
 });
 
+test('a label dragged by hand stays where it was put; a level dragged sideways moves in x', async ({ page }) => {
+  const label = page.locator('svg.overlay rect.label-hit[data-pathway="catalysed"][data-point="i2"]');
+  const before = await label.boundingBox();
+  await dragBy(page, label, 30, 20);
+  const after = await label.boundingBox();
+  expect(after!.x - before!.x).toBeGreaterThan(20);
+  expect(after!.y - before!.y).toBeGreaterThan(12);
+  const int = level(page, 'INT', CAT);
+  const x0 = (await int.boundingBox())!.x;
+  await dragBy(page, int, 40, 0);
+  // The bar follows the pointer to the nearest 0.05 slot; neighbours re-space around it.
+  expect((await int.boundingBox())!.x - x0).toBeGreaterThan(15);
+  // Sideways moves change spacing, never the energy.
+  await expect(int).toHaveAccessibleName(/ΔG = 2\.3 kcal mol⁻¹/);
+});
+
+test('keyboard only: Tab reaches a level and the arrow keys nudge it by the shown decimal', async ({ page }) => {
+  const ts1 = level(page, 'TS1', CAT);
+  await ts1.focus();
+  await page.keyboard.press('ArrowUp');
+  await page.keyboard.press('Shift+ArrowUp');
+  // TS1 is a barrier of 21.1 over LA·AE (−4.2): +0.1 and +1.0 give 22.2, drawn at −4.2 + 22.2 = 18.0.
+  await expect(page.getByRole('region', { name: `Pathway ${CAT}` }).getByRole('textbox', { name: 'TS1 energy', exact: true })).toHaveValue('22.2');
+  await expect(ts1).toHaveAccessibleName(/ΔG = 18\.0 kcal mol⁻¹/);
+  await page.keyboard.press('Delete');
+  await expect(level(page, 'TS1', CAT)).toHaveCount(0);
+  await page.keyboard.press('Control+z');
+  await expect(level(page, 'TS1', CAT)).toHaveCount(1);
+});
+
 test('a TS dragged below its neighbour raises a finding that selects the point', async ({ page }) => {
   const ts3 = level(page, 'TS3', CAT);
   const below = (await centreY(level(page, 'LA + LC', CAT))) - (await centreY(ts3)) + 25;

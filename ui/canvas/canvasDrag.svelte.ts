@@ -77,6 +77,7 @@ export class CanvasDrag {
     }
     const g = this.#gesture;
     if (!g) return;
+    markFrame(event.timeStamp);
     const dx = event.clientX - g.x0, dy = event.clientY - g.y0;
     if (g.axis === null) {
       if (Math.hypot(dx, dy) < AXIS_LOCK_PX) return;
@@ -86,7 +87,6 @@ export class CanvasDrag {
     if (level && g.blocked) { this.note = `Dragging is off: ${g.blocked}.`; return; }
     const dyMm = dy / g.pxPerMm;
     const next = dragEdit(g.start, g.target, g.axis, dx / g.pxPerMm, dyMm, this.#view().geometry);
-    markFrame(event.timeStamp);
     if (!level || this.#commitCost <= LIVE_BUDGET_MS) return this.#commit(g, next, dyMm);
     const t0 = performance.now();
     g.pending = next;

@@ -155,6 +155,22 @@ test('export writes an SVG and a PDF with the figure labels', async ({ page }) =
   expect(text).toContain('LA·LC');
 });
 
+test('export writes the report PDF with the figure labels and the safety caution', async ({ page }) => {
+  await page.getByRole('button', { name: 'Export…' }).click();
+  const dialog = page.getByRole('dialog', { name: 'Export' });
+  await dialog.getByRole('combobox', { name: 'What' }).selectOption('report');
+  const download = page.waitForEvent('download');
+  await dialog.getByRole('button', { name: 'Save export…' }).click();
+  const file = await download;
+  expect(file.suggestedFilename()).toBe('demo-report.pdf');
+  const pdf = await getDocument({ data: new Uint8Array(readFileSync(await file.path())), useSystemFonts: false, disableFontFace: true, verbosity: 0 }).promise;
+  expect(pdf.numPages).toBeGreaterThan(1);
+  let text = '';
+  for (let i = 1; i <= pdf.numPages; i++) text += (await (await pdf.getPage(i)).getTextContent()).items.map((t) => ('str' in t ? t.str : '')).join(' ');
+  expect(text).toContain('TS-th');
+  expect(text).toMatch(/calorimetry/);
+});
+
 test('export writes a PNG at the chosen resolution', async ({ page }) => {
   await page.getByRole('button', { name: 'Export…' }).click();
   const dialog = page.getByRole('dialog', { name: 'Export' });

@@ -9,11 +9,13 @@ import { sceneToPdf } from '../../core/export/sceneToPdf.ts';
 import { pointsTable, tableToCsv, tableToMarkdown } from '../../core/export/tables.ts';
 import { analysisReport } from '../../core/report/analysisReport.ts';
 import type { ExportMimeType } from '../host/hostApi.ts';
-import { stepsTable } from './stepsTable.ts';
+import { analysisTables } from '../../core/export/analysisTables.ts';
+import { tablesToCsv, tablesToMarkdown } from '../../core/export/tablesDocument.ts';
+import { renderReport } from '../../core/export/renderReport.ts';
 import { svgToPng } from './svgToPng.ts';
 
 /** What can be exported from the editor. */
-export type ExportKind = 'svg' | 'pdf' | 'png' | 'points-csv' | 'points-md' | 'steps-csv' | 'steps-md';
+export type ExportKind = 'svg' | 'pdf' | 'png' | 'report' | 'points-csv' | 'points-md' | 'analysis-csv' | 'analysis-md';
 
 /** Export choices: figure size preset, theme and PNG resolution. */
 export interface ExportChoice { kind: ExportKind; preset: Preset; theme: ThemeName; dpi: number }
@@ -27,7 +29,7 @@ export interface ExportFont { metrics: FontMetrics; bytes: Uint8Array }
 /** Lays the figure out with the chosen preset and theme (the same scene the canvas draws) and writes the chosen format. */
 export async function buildExport(doc: Document, analysis: DocumentAnalysis, font: ExportFont, choice: ExportChoice, render = true): Promise<ExportFile> {
   const figure = () => layoutFigure(analysis.profile, doc, { metrics: font.metrics, preset: choice.preset, theme: choice.theme });
-  const table = (which: 'points' | 'steps') => (which === 'points' ? pointsTable(analysis.profile, doc.settings.decimals) : stepsTable(analysisReport(doc, analysis)));
+  const tables = () => analysisTables(analysisReport(doc, analysis), doc.settings.decimals);
   switch (choice.kind) {
     case 'svg': { const svg = sceneToSvg(figure()); return { data: svg, mimeType: 'image/svg+xml', extension: '.svg', preview: { svg } }; }
     case 'pdf': {
@@ -43,7 +45,14 @@ export async function buildExport(doc: Document, analysis: DocumentAnalysis, fon
       const data = render ? await svgToPng(sceneToSvg(scene, { embedFont: font.bytes }), scene.widthMm, scene.heightMm, choice.dpi) : new Uint8Array();
       return { data, mimeType: 'image/png', extension: '.png', preview: { svg } };
     }
-    case 'points-csv': case 'steps-csv': { const text = tableToCsv(table(choice.kind === 'points-csv' ? 'points' : 'steps')); return { data: text, mimeType: 'text/csv', extension: '.csv', preview: { text } }; }
-    case 'points-md': case 'steps-md': { const text = tableToMarkdown(table(choice.kind === 'points-md' ? 'points' : 'steps')); return { data: text, mimeType: 'text/markdown', extension: '.md', preview: { text } }; }
+    case 'report': {
+      const svg = sceneToSvg(figure());
+      const data = render ? await renderReport(doc, { fontBytes: font.bytes, preset: choice.preset, theme: choice.theme }) : new Uint8Array();
+      return { data, mimeType: 'application/pdf', extension: '.pdf', preview: { svg } };
+    }
+    case 'points-csv': { const text = tableToCsv(pointsTable(analysis.profile, doc.settings.decimals)); return { data: text, mimeType: 'text/csv', extension: '.csv', preview: { text } }; }
+    case 'points-md': { const text = tableToMarkdown(pointsTable(analysis.profile, doc.settings.decimals)); return { data: text, mimeType: 'text/markdown', extension: '.md', preview: { text } }; }
+    case 'analysis-csv': { const text = tablesToCsv(tables()); return { data: text, mimeType: 'text/csv', extension: '.csv', preview: { text } }; }
+    case 'analysis-md': { const text = tablesToMarkdown(tables(), doc.title || 'Energy profile'); return { data: text, mimeType: 'text/markdown', extension: '.md', preview: { text } }; }
   }
 }

@@ -5,8 +5,8 @@ import type { Box } from './scene.ts';
 export interface BoxIndex {
   add(box: Box): void;
   hits(box: Box, margin: number): boolean;
-  /** Like `hits`, for a box given by its numbers (no allocation on the hot path). */
-  hitsAt(x: number, y: number, w: number, h: number, margin: number): boolean;
+  /** Like `hits`, for a box given by its numbers (no allocation on the hot path); `except` is not counted. */
+  hitsAt(x: number, y: number, w: number, h: number, margin: number, except?: Box): boolean;
   /**
    * How far a box at (x, y, w, h) must move along y (dir −1 up, +1 down) before it comes
    * clear of every box it now touches (closer than `margin`): 0 when it touches none.
@@ -36,11 +36,11 @@ export function boxIndex(cellMm: number): BoxIndex {
       top = Math.min(top, box.y);
     },
     hits: (b, margin) => index.hitsAt(b.x, b.y, b.w, b.h, margin),
-    hitsAt(x, y, w, h, margin) {
+    hitsAt(x, y, w, h, margin, except) {
       for (let i = cell(x - margin); i <= cell(x + w + margin); i++) for (let j = cell(y - margin); j <= cell(y + h + margin); j++) {
         const list = cells.get(key(i, j));
         if (!list) continue;
-        for (const b of list) if (x < b.x + b.w + margin && b.x < x + w + margin && y < b.y + b.h + margin && b.y < y + h + margin) return true;
+        for (const b of list) if (b !== except && x < b.x + b.w + margin && b.x < x + w + margin && y < b.y + b.h + margin && b.y < y + h + margin) return true;
       }
       return false;
     },

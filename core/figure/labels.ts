@@ -4,7 +4,7 @@ import { barBox, type PlacedLevel } from './levels.ts';
 import type { PathwayPaint } from './pathwayPaint.ts';
 import { placeLabels, type LabelRequest } from './placeLabels.ts';
 import { boxIndex, type BoxIndex } from './boxIndex.ts';
-import { pathPieces } from './pathPieces.ts';
+import { eachPiece } from './pathPieces.ts';
 import type { AnnotationLabel } from './annotationShapes.ts';
 import type { Box, PathItem, SceneItem } from './scene.ts';
 import { textItem } from './text/textItem.ts';
@@ -39,7 +39,9 @@ export function labels(ctx: FigureContext, placed: readonly PlacedLevel[], paint
     else {
       const group = { level, block, shared: false };
       groups.push(group);
-      byKey.set(key, [...(byKey.get(key) ?? []), group]);
+      const same = byKey.get(key);
+      if (same) same.push(group);
+      else byKey.set(key, [group]);
     }
   }
   const requests: LabelRequest[] = groups.map(({ level, block }) => ({
@@ -51,7 +53,6 @@ export function labels(ctx: FigureContext, placed: readonly PlacedLevel[], paint
   const placements = all.slice(0, requests.length);
   const items: SceneItem[] = [];
   const boxes = placements.map((p) => p.box);
-  const owners = new Map<Box, number>(boxes.map((b, i) => [b, i]));
   const index = boxIndex(Math.max(2, ...boxes.slice(0, 50).map((b) => b.w)));
   boxes.forEach(index.add);
   groups.forEach((g, i) => {
@@ -59,7 +60,7 @@ export function labels(ctx: FigureContext, placed: readonly PlacedLevel[], paint
     const colour = g.shared ? ctx.theme.ink : paints.get(g.level.point.pathwayIndex)!.colour;
     const line = displaced ? leader(ctx, g.level, box) : null;
     // A leader that would cut through another label confuses more than it helps.
-    if (line && !crossesOthers(line, index, owners, i)) items.push(line);
+    if (line && !crossesOthers(line, index, box)) items.push(line);
     items.push(...blockItems(g.block, box, ctx.theme.ink, colour, { pathway: g.level.point.pathwayId, point: g.level.point.pointId }));
   });
   const annotationBoxes = all.slice(requests.length).map((p, k) => {
@@ -75,13 +76,16 @@ export function labels(ctx: FigureContext, placed: readonly PlacedLevel[], paint
   return { items, boxes, annotationBoxes };
 }
 
-function crossesOthers(line: PathItem, index: BoxIndex, owners: ReadonlyMap<Box, number>, own: number): boolean {
-  return pathPieces(line.segments, 0, 16).some((p) => index.touching(p).some((b) => owners.get(b) !== own));
+function crossesOthers(line: PathItem, index: BoxIndex, own: Box): boolean {
+  return eachPiece(line.segments, 0, 16, (x, y, w, h) => index.hitsAt(x, y, w, h, 0, own));
 }
 
 /** A thin line from the bar's centre to the nearest point of a label moved away from it. */
 function leader(ctx: FigureContext, level: PlacedLevel, box: Box): PathItem {
-  return { ...leaderLine(ctx, level.x, level.y, box), pathway: level.point.pathwayId, point: level.point.pointId };
+  const line = leaderLine(ctx, level.x, level.y, box);
+  line.pathway = level.point.pathwayId;
+  line.point = level.point.pointId;
+  return line;
 }
 
 function leaderLine(ctx: FigureContext, fromX: number, fromY: number, box: Box): PathItem {

@@ -59,7 +59,8 @@ export function layoutFigure(profile: ResolvedProfile, doc: Document, options: L
   const plot = { x: left, y: y0, w: x1 - left, h: y1 - y0 };
 
   // Room for a label above the highest and below the lowest level.
-  const tallest = Math.max(0, ...known.slice(0, 200).map((q) => labelBlock(q.label, q.kind, q.energy, { ...ctx, decimals: doc.settings.decimals, energyFormat: fig.energyFormat, daggerOnTs: fig.daggerOnTs }).h));
+  const style = { ...ctx, decimals: doc.settings.decimals, energyFormat: fig.energyFormat, daggerOnTs: fig.daggerOnTs };
+  const tallest = Math.max(0, ...known.slice(0, 200).map((q) => labelBlock(q.label, q.kind, q.energy, style).h));
   const pad = tallest + 3 * ctx.gapMm;
   const plans = planAnnotations(profile, doc, pathways).plans;
   const scale = energyScale([...known.map((q) => q.energy), ...planEnergies(plans)], y1 - pad, y0 + pad);

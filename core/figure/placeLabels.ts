@@ -1,4 +1,6 @@
-import { boxIndex, type BoxIndex } from './boxIndex.ts';
+import { boxIndex } from './boxIndex.ts';
+import { cheapestSpot, type SpotIndexes, type SpotLine } from './cheapestSpot.ts';
+import { columnIndex } from './columnIndex.ts';
 import type { Box } from './scene.ts';
 
 /** A label to place next to its level bar (or beside an annotation's arrow). */
@@ -39,75 +41,35 @@ export interface Obstacles {
 export function placeLabels(requests: readonly LabelRequest[], obstacles: Obstacles, bounds: Box, gap: number, step = 0.5): Placement[] {
   const cell = Math.max(2, ...requests.slice(0, 50).map((r) => r.w));
   const hard = boxIndex(cell);
+  const columns = columnIndex(cell);
   const soft = boxIndex(cell);
-  obstacles.hard.forEach(hard.add);
+  for (const b of obstacles.hard) {
+    hard.add(b);
+    columns.add(b);
+  }
   obstacles.soft.forEach(soft.add);
+  const at: SpotIndexes = { hard, columns, soft };
   return requests.map((r) => {
     const home = r.prefer === 'beside' ? side(r, 'right', gap) : spot(r, r.prefer, gap);
     const placement: Placement = r.fixed
       ? { box: { ...home, x: home.x + r.fixed.dx, y: home.y + r.fixed.dy }, displaced: false }
-      : cheapest(r, bounds, gap, step, hard, soft)
+      : cheapest(r, bounds, gap, step, at)
         ?? { box: { ...home, y: Math.min(hard.top(), bounds.y) - 2 * gap - r.h }, displaced: true };
     hard.add(placement.box);
+    columns.add(placement.box);
     return placement;
   });
 }
 
-/** One line of candidate spots: fixed x, y moving from y0 in direction dir as the distance grows. */
-interface Stream {
-  x: number;
-  y0: number;
-  dir: 1 | -1;
-  extra: number;
-  /** First step index worth looking at again (every spot before it is known blocked). */
-  next: number;
-  dead: boolean;
-}
-
-function cheapest(r: LabelRequest, bounds: Box, gap: number, step: number, hard: BoxIndex, soft: BoxIndex): Placement | undefined {
+function cheapest(r: LabelRequest, bounds: Box, gap: number, step: number, at: SpotIndexes): Placement | undefined {
   step = Math.max(step, r.h / 3);
   const limit = Math.ceil((bounds.h + r.h) / step);
-  const streams = candidateStreams(r, gap).map(([b, dir, extra]): Stream => ({
+  const lines = candidateStreams(r, gap).map(([b, dir, extra]): SpotLine => ({
     // Slide a label sideways into the bounds rather than lose a spot next to its bar.
-    x: Math.min(Math.max(b.x, bounds.x), bounds.x + bounds.w - r.w), y0: b.y, dir, extra, next: 0, dead: false,
+    x: Math.min(Math.max(b.x, bounds.x), bounds.x + bounds.w - r.w), y0: b.y, dir, extra,
   }));
-  const softCost = r.h;
-  const [top, bottom] = [bounds.y, bounds.y + bounds.h];
-  let best: { placement: Placement; cost: number } | undefined;
-  let i = 0;
-  while (i <= limit) {
-    const d = i * step;
-    if (best && d >= best.cost) break;
-    let soonest = Infinity;
-    for (const s of streams) {
-      if (s.dead) continue;
-      if (s.next > i) {
-        soonest = Math.min(soonest, s.next);
-        continue;
-      }
-      const base = d + s.extra;
-      // Costs only grow along a stream: once it cannot win, it never will.
-      if (best && base >= best.cost) { s.dead = true; continue; }
-      const y = s.y0 + s.dir * d;
-      const outAhead = s.dir < 0 ? y < top : y + r.h > bottom;
-      if (s.x < bounds.x || s.x + r.w > bounds.x + bounds.w || outAhead) { s.dead = true; continue; }
-      s.next = i + 1;
-      soonest = Math.min(soonest, s.next);
-      if (y < top || y + r.h > bottom) continue;
-      const move = hard.clearance(s.x, y, r.w, r.h, gap, s.dir);
-      if (move > 0) {
-        // Every spot closer than `move` along this line is blocked by the same box: skip them.
-        s.next = Math.max(i + 1, Math.ceil((d + move) / step - 1e-9));
-        soonest = Math.min(soonest, s.next);
-        continue;
-      }
-      const cost = base + (soft.hitsAt(s.x, y, r.w, r.h, 0) ? softCost : 0);
-      if (!best || cost < best.cost) best = { placement: { box: { x: s.x, y, w: r.w, h: r.h }, displaced: d > r.h }, cost };
-    }
-    if (soonest === Infinity) break;
-    i = Math.max(i + 1, soonest);
-  }
-  return best?.placement;
+  const found = cheapestSpot(lines, r.w, r.h, bounds, gap, step, limit, at);
+  return found && { box: found.box, displaced: found.distance > r.h };
 }
 
 /** The candidate lines in order of preference, with their extra cost (multiples of the label height, our tuning). */

@@ -8,3 +8,6 @@ export { SPECIES_COLUMNS, speciesRow, columnByName, type SpeciesColumn, type Spe
 export { startHistory, record, undo, redo, closeGroup, HISTORY_LIMIT, type History, type RecordOptions } from './history.ts';
 export { uniqueId } from './uniqueId.ts';
 export { addComparison, removeComparison } from './comparisonEdits.ts';
+export { setComposition, compositionProblem } from './compositionEdits.ts';
+export { editRateData, MIN_RATE_ROWS, type RateRow, type RateDataEdit } from './rateDataEdits.ts';
+export { addAnnotation, removeAnnotation, annotationProblem, type Annotation } from './annotationEdits.ts';

@@ -2,7 +2,7 @@ import type { FileFilter } from 'electron';
 import { stat } from 'node:fs/promises';
 import { basename, resolve } from 'node:path';
 import { DOCUMENT_EXTENSION, EXPORT_TYPES, type AutosaveSnapshot, type CloseReply, type HostWire, type OpenedFile, type SaveRequest } from '../ui/host/hostApi.ts';
-import { atomicWrite } from './atomicWrite.ts';
+import { atomicWrite } from '../core/io/atomicWrite.node.ts';
 import { diskState, fingerprintOf, type FileFingerprint } from './fileFingerprint.ts';
 import { documentFilter, exportFilter, withExtension } from './fileFilters.ts';
 import type { Logger } from './hardenContents.ts';

@@ -1,5 +1,5 @@
 import { readFile } from 'node:fs/promises';
-import { atomicWrite } from './atomicWrite.ts';
+import { atomicWrite } from '../core/io/atomicWrite.node.ts';
 
 /**
  * The parsed contents of a small JSON file the app keeps for itself, or `undefined` when

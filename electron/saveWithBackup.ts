@@ -1,7 +1,7 @@
 import { copyFile, open, rename, unlink } from 'node:fs/promises';
 import { basename, dirname, join } from 'node:path';
 import { randomBytes } from 'node:crypto';
-import { atomicWrite } from './atomicWrite.ts';
+import { atomicWrite } from '../core/io/atomicWrite.node.ts';
 
 /**
  * Where the previous version of a document is kept: next to it, with `.bak` added

@@ -4,7 +4,8 @@ export interface CliIo {
   err(text: string): void;
   readFile(path: string): string;
   readBytes(path: string): Uint8Array;
-  writeFile(path: string, data: string | Uint8Array): void;
+  /** Writes an output file atomically (temporary file, flush, rename). */
+  writeFile(path: string, data: string | Uint8Array): void | Promise<void>;
 }
 
 /** Exit codes: success, bad input (file or data), bad usage. */

@@ -1,6 +1,6 @@
 import { parseArgs } from 'node:util';
-import { closeSync, fsyncSync, openSync, readFileSync, renameSync, rmSync, writeSync } from 'node:fs';
-import { basename, dirname, join } from 'node:path';
+import { readFileSync } from 'node:fs';
+import { atomicWrite } from '../io/atomicWrite.node.ts';
 import { CliError, EXIT_OK, EXIT_USAGE, type CliIo } from './io.ts';
 import { runAnalyze } from './analyze.ts';
 import { runThermo } from './thermo.ts';
@@ -16,26 +16,8 @@ export const nodeIo: CliIo = {
   err: (text) => process.stderr.write(text),
   readFile: (path) => readFileSync(path, 'utf8'),
   readBytes: (path) => new Uint8Array(readFileSync(path)),
-  writeFile: writeAtomically,
+  writeFile: atomicWrite,
 };
-
-/** Temp file in the same folder, flushed, then renamed over the target: never a torn output. */
-function writeAtomically(path: string, data: string | Uint8Array): void {
-  const temp = join(dirname(path), `.${basename(path)}.${process.pid}.tmp`);
-  const fd = openSync(temp, 'w');
-  try {
-    writeSync(fd, typeof data === 'string' ? Buffer.from(data, 'utf8') : data);
-    fsyncSync(fd);
-  } finally {
-    closeSync(fd);
-  }
-  try {
-    renameSync(temp, path);
-  } catch (error) {
-    rmSync(temp, { force: true });
-    throw error;
-  }
-}
 
 type Command = (positionals: string[], values: Record<string, string | boolean | string[] | undefined>, io: CliIo) => void | Promise<void>;
 type OptionSpec = { type: 'string' | 'boolean'; multiple?: boolean; short?: string };

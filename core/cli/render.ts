@@ -46,5 +46,5 @@ export async function runRender(file: string, options: RenderCliOptions, io: Cli
     format, fontBytes: readBundledFont(),
     ...(preset ? { preset } : {}), ...(theme ? { theme } : {}), ...(widthMm !== undefined ? { widthMm } : {}), ...(dpi !== undefined ? { dpi } : {}),
   });
-  writeOutput(options.output, data, io);
+  await writeOutput(options.output, data, io);
 }

@@ -22,13 +22,13 @@ function outputOf(options: ReportCliOptions, allowed: readonly string[], command
 export async function runReport(file: string, options: ReportCliOptions, io: CliIo): Promise<void> {
   const output = outputOf(options, ['.pdf'], 'report');
   const doc = applySettingOptions(loadInput(file, io), options);
-  writeOutput(output, await renderReport(doc, { fontBytes: readBundledFont() }), io);
+  await writeOutput(output, await renderReport(doc, { fontBytes: readBundledFont() }), io);
 }
 
 /** `passline tables FILE -o OUT.csv|OUT.md`: the points and the analysis as tables. */
-export function runTables(file: string, options: ReportCliOptions, io: CliIo): void {
+export async function runTables(file: string, options: ReportCliOptions, io: CliIo): Promise<void> {
   const output = outputOf(options, ['.csv', '.md'], 'tables');
   const doc = applySettingOptions(loadInput(file, io), options);
   const tables = analysisTables(analysisReport(doc, analyseDocument(doc)), doc.settings.decimals);
-  writeOutput(output, extname(output).toLowerCase() === '.md' ? tablesToMarkdown(tables, doc.title) : tablesToCsv(tables), io);
+  await writeOutput(output, extname(output).toLowerCase() === '.md' ? tablesToMarkdown(tables, doc.title) : tablesToCsv(tables), io);
 }

@@ -1,9 +1,9 @@
 import { CliError, type CliIo } from './io.ts';
 
 /** Writes an output file, turning an unwritable path into a one-line error. */
-export function writeOutput(path: string, data: string | Uint8Array, io: CliIo): void {
+export async function writeOutput(path: string, data: string | Uint8Array, io: CliIo): Promise<void> {
   try {
-    io.writeFile(path, data);
+    await io.writeFile(path, data);
   } catch (error) {
     const code = (error as NodeJS.ErrnoException).code;
     throw new CliError(`cannot write ${path}: ${code ?? (error as Error).message}`);

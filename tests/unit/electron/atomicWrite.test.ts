@@ -2,7 +2,7 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { atomicWrite } from '../../../electron/atomicWrite.ts';
+import { atomicWrite } from '../../../core/io/atomicWrite.node.ts';
 import { killDelays, killMidWrite } from './helpers/killMidWrite.ts';
 
 let folder: string;

@@ -107,27 +107,23 @@ export class DocumentStore {
   }
 
   /** Asks the host for a file; a valid one replaces the document, a bad one leaves it untouched. */
-  async open(): Promise<void> {
-    await this.#run(async () => {
-      const file = await this.#host.openDocument();
-      if (!file) return void (this.status = 'Open cancelled.');
-      this.openText(file.name, file.text, file.path);
-    }, 'open');
+  open(): Promise<void> {
+    return this.#openFrom(() => this.#host.openDocument());
   }
 
   /** Opens a file the user chose outside the window (recent list, command line, system). */
-  async openKnown(path: string): Promise<void> {
-    await this.#run(async () => {
-      const file = await this.#host.openKnownFile(path);
-      if (!file) return void (this.status = 'Open cancelled.');
-      this.openText(file.name, file.text, file.path);
-    }, 'open');
+  openKnown(path: string): Promise<void> {
+    return this.#openFrom(() => this.#host.openKnownFile(path));
   }
 
   /** Opens a file dropped on the window, through the host (so the desktop knows its path). */
-  async openDropped(dropped: File): Promise<void> {
+  openDropped(dropped: File): Promise<void> {
+    return this.#openFrom(() => this.#host.openDroppedFile(dropped));
+  }
+
+  async #openFrom(fetch: () => Promise<{ name: string; text: string; path?: string } | null>): Promise<void> {
     await this.#run(async () => {
-      const file = await this.#host.openDroppedFile(dropped);
+      const file = await fetch();
       if (!file) return void (this.status = 'Open cancelled.');
       this.openText(file.name, file.text, file.path);
     }, 'open');

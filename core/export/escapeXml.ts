@@ -1,8 +1,11 @@
 /** Escapes text for XML content and double- or single-quoted attributes. */
 export function escapeXml(text: string): string {
-  return text.replace(/[&<>"']/g, (c) => ESCAPES[c]!);
+  // Most strings (colours, numbers, plain labels) need nothing: skip the replace for them.
+  return SPECIAL.test(text) ? text.replace(SPECIALS, (c) => ESCAPES[c]!) : text;
 }
 
+const SPECIAL = /[&<>"']/;
+const SPECIALS = /[&<>"']/g;
 const ESCAPES: Record<string, string> = { '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&apos;' };
 
 /** A number for SVG output: at most 3 decimals, no trailing zeros, no "-0". */

@@ -13,12 +13,12 @@ export function svgSink(): SvgSink {
   let d = '';
   return {
     elements,
-    moveTo: (x, y) => { d += `M${num(x)} ${num(y)}`; },
-    lineTo: (x, y) => { d += `L${num(x)} ${num(y)}`; },
-    curveTo: (x1, y1, x2, y2, x, y) => { d += `C${num(x1)} ${num(y1)} ${num(x2)} ${num(y2)} ${num(x)} ${num(y)}`; },
+    moveTo: (x, y) => { d += 'M' + num(x) + ' ' + num(y); },
+    lineTo: (x, y) => { d += 'L' + num(x) + ' ' + num(y); },
+    curveTo: (x1, y1, x2, y2, x, y) => { d += 'C' + num(x1) + ' ' + num(y1) + ' ' + num(x2) + ' ' + num(y2) + ' ' + num(x) + ' ' + num(y); },
     closePath: () => { d += 'Z'; },
     paint(stroke, fill) {
-      elements.push(`<path d="${d}" ${paintAttributes(stroke, fill)}/>`);
+      elements.push('<path d="' + d + '" ' + paintAttributes(stroke, fill) + '/>');
       d = '';
     },
     text(item) {
@@ -28,17 +28,20 @@ export function svgSink(): SvgSink {
 }
 
 function paintAttributes(stroke: Stroke | undefined, fill: string | undefined): string {
-  const parts = [`fill="${fill ? escapeXml(fill) : 'none'}"`];
+  let out = 'fill="' + (fill ? escapeXml(fill) : 'none') + '"';
   if (stroke) {
-    parts.push(`stroke="${escapeXml(stroke.colour)}"`, `stroke-width="${num(stroke.widthMm)}"`, `stroke-linecap="${stroke.cap ?? 'butt'}"`);
-    if (stroke.dashMm) parts.push(`stroke-dasharray="${stroke.dashMm.map(num).join(' ')}"`);
+    out += ' stroke="' + escapeXml(stroke.colour) + '" stroke-width="' + num(stroke.widthMm) + '" stroke-linecap="' + (stroke.cap ?? 'butt') + '"';
+    if (stroke.dashMm) out += ' stroke-dasharray="' + stroke.dashMm.map(num).join(' ') + '"';
   }
-  return parts.join(' ');
+  return out;
 }
 
 function textElement(item: TextItem): string {
-  const rotate = item.rotateDeg ? ` transform="rotate(${num(item.rotateDeg)} ${num(item.x)} ${num(item.y)})"` : '';
-  const spans = item.runs.map((r) =>
-    `<tspan x="${num(item.x + r.dx)}" y="${num(item.y + r.dy)}" font-size="${num(r.sizeMm)}">${escapeXml(r.text)}</tspan>`).join('');
-  return `<text xml:space="preserve" fill="${escapeXml(item.colour)}"${rotate}>${spans}</text>`;
+  let out = '<text xml:space="preserve" fill="' + escapeXml(item.colour) + '"';
+  if (item.rotateDeg) out += ' transform="rotate(' + num(item.rotateDeg) + ' ' + num(item.x) + ' ' + num(item.y) + ')"';
+  out += '>';
+  for (const r of item.runs) {
+    out += '<tspan x="' + num(item.x + r.dx) + '" y="' + num(item.y + r.dy) + '" font-size="' + num(r.sizeMm) + '">' + escapeXml(r.text) + '</tspan>';
+  }
+  return out + '</text>';
 }

@@ -1,5 +1,5 @@
 import type { BoxIndex } from './boxIndex.ts';
-import { RUN_EPS, runAt, type BlockedRuns, type ColumnIndex } from './columnIndex.ts';
+import { blockedRuns, RUN_EPS, runAt, type BlockedRuns, type ColumnIndex } from './columnIndex.ts';
 import type { Box } from './scene.ts';
 
 /** One line of candidate spots: fixed x, top edge y0 + dir · distance, with an extra cost. */
@@ -10,11 +10,20 @@ export interface SpotLine {
   extra: number;
 }
 
-/** What a search looks at: bars and labels placed so far (both indexes hold the same boxes) and the connectors. */
-export interface SpotIndexes {
+/** What a search looks at, with scratch space reused from one search to the next. */
+export interface SpotSearch {
+  /** Bars and labels placed so far: `hard` and `columns` hold the same boxes. */
   hard: BoxIndex;
   columns: ColumnIndex;
   soft: BoxIndex;
+  /** Blocked runs of the columns met in the current search. */
+  runs: BlockedRuns[];
+  runX: number[];
+}
+
+/** A search over the given indexes. */
+export function spotSearch(hard: BoxIndex, columns: ColumnIndex, soft: BoxIndex): SpotSearch {
+  return { hard, columns, soft, runs: [], runX: [] };
 }
 
 /**
@@ -26,16 +35,19 @@ export interface SpotIndexes {
  * runs of its column; every spot taken is confirmed by an exact test. Undefined when no
  * spot is clear.
  */
-export function cheapestSpot(lines: readonly SpotLine[], w: number, h: number, bounds: Box, gap: number, step: number, limit: number, at: SpotIndexes): { box: Box; distance: number } | undefined {
-  const [top, bottom] = [bounds.y, bounds.y + bounds.h];
+export function cheapestSpot(lines: readonly SpotLine[], w: number, h: number, bounds: Box, gap: number, step: number, limit: number, at: SpotSearch): { box: Box; distance: number } | undefined {
+  const top = bounds.y;
+  const bottom = bounds.y + bounds.h;
   let bestCost = Infinity;
   let bestI = -1;
-  let best: { box: Box; distance: number } | undefined;
-  const columns: { x: number; runs: BlockedRuns }[] = [];
+  let bestY = 0;
+  let bestX = 0;
+  let columns = 0;
   for (const line of lines) {
     const { x, y0, dir, extra } = line;
     if (x < bounds.x || x + w > bounds.x + bounds.w) continue;
-    let runs = columns.find((c) => c.x === x)?.runs;
+    let runs: BlockedRuns | undefined;
+    for (let c = 0; c < columns; c++) if (at.runX[c] === x) runs = at.runs[c];
     let i = 0;
     while (i <= limit) {
       const d = i * step;
@@ -51,8 +63,10 @@ export function cheapestSpot(lines: readonly SpotLine[], w: number, h: number, b
       let k = runs ? runAt(runs, y) : -1;
       if (k < 0 && at.hard.hitsAt(x, y, w, h, gap)) {
         if (!runs) {
-          runs = at.columns.blocked(x, w, h, gap, top, bottom - h);
-          columns.push({ x, runs });
+          if (columns === at.runs.length) at.runs.push(blockedRuns());
+          runs = at.runs[columns]!;
+          at.runX[columns++] = x;
+          at.columns.blocked(x, w, h, gap, top, bottom - h, runs);
           k = runAt(runs, y);
         }
         if (k < 0) {
@@ -70,10 +84,11 @@ export function cheapestSpot(lines: readonly SpotLine[], w: number, h: number, b
       if (cost < bestCost || (cost === bestCost && i < bestI)) {
         bestCost = cost;
         bestI = i;
-        best = { box: { x, y, w, h }, distance: d };
+        bestX = x;
+        bestY = y;
       }
       i++;
     }
   }
-  return best;
+  return bestI < 0 ? undefined : { box: { x: bestX, y: bestY, w, h }, distance: bestI * step };
 }

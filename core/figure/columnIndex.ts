@@ -1,9 +1,15 @@
 import type { Box } from './scene.ts';
 
-/** Sorted, merged ranges of top edges (see `ColumnIndex.blocked`), as parallel arrays. */
+/** Sorted, merged ranges of top edges (see `ColumnIndex.blocked`): the first `n` entries of lo and hi. */
 export interface BlockedRuns {
-  lo: number[];
-  hi: number[];
+  lo: Float64Array;
+  hi: Float64Array;
+  n: number;
+}
+
+/** An empty, reusable BlockedRuns. */
+export function blockedRuns(): BlockedRuns {
+  return { lo: new Float64Array(32), hi: new Float64Array(32), n: 0 };
 }
 
 /**
@@ -16,12 +22,12 @@ export const RUN_EPS = 1e-7;
 export interface ColumnIndex {
   add(box: Box): void;
   /**
-   * Where a w × h box at x cannot sit: every top edge y with lo[k] + RUN_EPS < y <
-   * hi[k] − RUN_EPS puts it closer than `margin` to some box added. Tops outside these
-   * ranges (or within RUN_EPS of their ends) are undecided and need an exact test, as are
-   * all tops outside [from, to].
+   * Writes into `out` where a w × h box at x cannot sit: every top edge y with
+   * lo[k] + RUN_EPS < y < hi[k] − RUN_EPS puts it closer than `margin` to some box added.
+   * Tops outside these ranges (or within RUN_EPS of their ends) are undecided and need an
+   * exact test, as are all tops outside [from, to].
    */
-  blocked(x: number, w: number, h: number, margin: number, from: number, to: number): BlockedRuns;
+  blocked(x: number, w: number, h: number, margin: number, from: number, to: number, out: BlockedRuns): void;
 }
 
 /** A column index with strips `stripMm` wide; a box is filed in every strip it covers. */
@@ -29,54 +35,48 @@ export function columnIndex(stripMm: number): ColumnIndex {
   const strips = new Map<number, Box[]>();
   const strip = (v: number) => Math.floor(v / stripMm);
   let tallest = 0;
+  // Scratch for the merge, reused between calls.
+  const lists: Box[][] = [];
+  let at = new Int32Array(8);
+  let end = new Int32Array(8);
   return {
     add(box) {
       tallest = Math.max(tallest, box.h);
       for (let i = strip(box.x); i <= strip(box.x + box.w); i++) {
         const list = strips.get(i);
-        if (!list) {
-          strips.set(i, [box]);
-          continue;
-        }
-        let a = 0;
-        let b = list.length;
-        while (a < b) {
-          const m = (a + b) >> 1;
-          if (list[m]!.y <= box.y) a = m + 1;
-          else b = m;
-        }
-        list.splice(a, 0, box);
+        if (!list) strips.set(i, [box]);
+        else list.splice(firstBelow(list, box.y, true), 0, box);
       }
     },
-    blocked(x, w, h, margin, from, to) {
-      const lists: Box[][] = [];
+    blocked(x, w, h, margin, from, to, out) {
+      let k = 0;
       for (let i = strip(x - margin); i <= strip(x + w + margin); i++) {
         const list = strips.get(i);
-        if (list) lists.push(list);
+        if (!list) continue;
+        if (k === at.length) {
+          const [a, e] = [new Int32Array(2 * k), new Int32Array(2 * k)];
+          a.set(at);
+          e.set(end);
+          [at, end] = [a, e];
+        }
+        lists[k] = list;
+        // Only boxes that can block a top in [from, to].
+        at[k] = firstBelow(list, from - margin - tallest, false);
+        end[k] = firstBelow(list, to + h + margin, false);
+        k++;
       }
-      return mergeRuns(lists, x, w, h, margin, from, to, tallest);
+      out.n = 0;
+      mergeRuns(lists, at, end, k, x, w, h, margin, out);
     },
   };
 }
 
-/**
- * Walks the strips' boxes in order of top edge (a k-way merge) and joins overlapping
- * ranges. Only boxes that can block a top in [from, to] are looked at; `tallest` bounds
- * the heights of the boxes in the strips.
- */
-function mergeRuns(lists: readonly Box[][], x: number, w: number, h: number, margin: number, from: number, to: number, tallest: number): BlockedRuns {
-  const lo: number[] = [];
-  const hi: number[] = [];
-  const at: number[] = [];
-  const end: number[] = [];
-  for (const list of lists) {
-    at.push(firstAtOrBelow(list, from - margin - tallest));
-    end.push(firstAtOrBelow(list, to + h + margin));
-  }
+/** Walks the strips' boxes in order of top edge (a k-way merge) and joins overlapping ranges. */
+function mergeRuns(lists: readonly Box[][], at: Int32Array, end: Int32Array, count: number, x: number, w: number, h: number, margin: number, out: BlockedRuns): void {
   for (;;) {
     let pick = -1;
     let pickY = Infinity;
-    for (let k = 0; k < lists.length; k++) {
+    for (let k = 0; k < count; k++) {
       if (at[k]! >= end[k]!) continue;
       const y = lists[k]![at[k]!]!.y;
       if (y < pickY) {
@@ -84,29 +84,36 @@ function mergeRuns(lists: readonly Box[][], x: number, w: number, h: number, mar
         pickY = y;
       }
     }
-    if (pick < 0) return { lo, hi };
+    if (pick < 0) return;
     const b = lists[pick]![at[pick]!]!;
     at[pick]!++;
     if (!(x < b.x + b.w + margin && b.x < x + w + margin)) continue;
     const top = b.y - h - margin;
     const bottom = b.y + b.h + margin;
-    const n = lo.length;
+    const n = out.n;
     // Join only with a clear overlap, so a point near a joint is deep inside one of the two.
-    if (n > 0 && top < hi[n - 1]! - 2 * RUN_EPS) hi[n - 1] = Math.max(hi[n - 1]!, bottom);
+    if (n > 0 && top < out.hi[n - 1]! - 2 * RUN_EPS) out.hi[n - 1] = Math.max(out.hi[n - 1]!, bottom);
     else {
-      lo.push(top);
-      hi.push(bottom);
+      if (n === out.lo.length) {
+        const [lo, hi] = [new Float64Array(2 * n), new Float64Array(2 * n)];
+        lo.set(out.lo);
+        hi.set(out.hi);
+        [out.lo, out.hi] = [lo, hi];
+      }
+      out.lo[n] = top;
+      out.hi[n] = bottom;
+      out.n = n + 1;
     }
   }
 }
 
-/** Index of the first box in a list sorted by top edge whose top is at or below y. */
-function firstAtOrBelow(list: readonly Box[], y: number): number {
+/** Index of the first box (sorted by top edge) whose top lies below y, or at y too unless `strict`. */
+function firstBelow(list: readonly Box[], y: number, strict: boolean): number {
   let a = 0;
   let b = list.length;
   while (a < b) {
     const m = (a + b) >> 1;
-    if (list[m]!.y < y) a = m + 1;
+    if (list[m]!.y < y || (strict && list[m]!.y === y)) a = m + 1;
     else b = m;
   }
   return a;
@@ -115,7 +122,7 @@ function firstAtOrBelow(list: readonly Box[], y: number): number {
 /** Index of the run that holds y deeper than RUN_EPS, or −1. */
 export function runAt(runs: BlockedRuns, y: number): number {
   let a = 0;
-  let b = runs.lo.length;
+  let b = runs.n;
   while (a < b) {
     const m = (a + b) >> 1;
     if (runs.lo[m]! + RUN_EPS < y) a = m + 1;

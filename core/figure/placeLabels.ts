@@ -1,5 +1,5 @@
 import { boxIndex } from './boxIndex.ts';
-import { cheapestSpot, type SpotIndexes, type SpotLine } from './cheapestSpot.ts';
+import { cheapestSpot, spotSearch, type SpotLine, type SpotSearch } from './cheapestSpot.ts';
 import { columnIndex } from './columnIndex.ts';
 import type { Box } from './scene.ts';
 
@@ -48,12 +48,13 @@ export function placeLabels(requests: readonly LabelRequest[], obstacles: Obstac
     columns.add(b);
   }
   obstacles.soft.forEach(soft.add);
-  const at: SpotIndexes = { hard, columns, soft };
+  const at = spotSearch(hard, columns, soft);
+  const lines = Array.from({ length: 6 }, (): SpotLine => ({ x: 0, y0: 0, dir: 1, extra: 0 }));
   return requests.map((r) => {
     const home = r.prefer === 'beside' ? side(r, 'right', gap) : spot(r, r.prefer, gap);
     const placement: Placement = r.fixed
       ? { box: { ...home, x: home.x + r.fixed.dx, y: home.y + r.fixed.dy }, displaced: false }
-      : cheapest(r, bounds, gap, step, at)
+      : cheapest(r, bounds, gap, step, at, lines)
         ?? { box: { ...home, y: Math.min(hard.top(), bounds.y) - 2 * gap - r.h }, displaced: true };
     hard.add(placement.box);
     columns.add(placement.box);
@@ -61,32 +62,52 @@ export function placeLabels(requests: readonly LabelRequest[], obstacles: Obstac
   });
 }
 
-function cheapest(r: LabelRequest, bounds: Box, gap: number, step: number, at: SpotIndexes): Placement | undefined {
+function cheapest(r: LabelRequest, bounds: Box, gap: number, step: number, at: SpotSearch, lines: SpotLine[]): Placement | undefined {
   step = Math.max(step, r.h / 3);
   const limit = Math.ceil((bounds.h + r.h) / step);
-  const lines = candidateStreams(r, gap).map(([b, dir, extra]): SpotLine => ({
-    // Slide a label sideways into the bounds rather than lose a spot next to its bar.
-    x: Math.min(Math.max(b.x, bounds.x), bounds.x + bounds.w - r.w), y0: b.y, dir, extra,
-  }));
+  candidateLines(r, gap, bounds, lines);
   const found = cheapestSpot(lines, r.w, r.h, bounds, gap, step, limit, at);
   return found && { box: found.box, displaced: found.distance > r.h };
 }
 
-/** The candidate lines in order of preference, with their extra cost (multiples of the label height, our tuning). */
-function candidateStreams(r: LabelRequest, gap: number): [Box, 1 | -1, number][] {
-  const [otherSide, beside] = [0.3 * r.h, 2 * r.h];
-  const right = side(r, 'right', gap);
-  const left = side(r, 'left', gap);
+/**
+ * Fills the six candidate lines in order of preference, with their extra cost (multiples
+ * of the label height, our tuning). Written into `out` since this runs once per label.
+ */
+function candidateLines(r: LabelRequest, gap: number, bounds: Box, out: SpotLine[]): void {
+  const otherSide = 0.3 * r.h;
+  const beside = 2 * r.h;
+  const centre = r.x - r.w / 2;
+  const right = r.x + r.halfWidth + 2 * gap;
+  const left = r.x - r.halfWidth - 2 * gap - r.w;
+  const level = r.y - r.h / 2;
+  const above = r.y - 2 * gap - r.h;
+  const below = r.y + 2 * gap;
+  const set = (k: number, x: number, y0: number, dir: 1 | -1, extra: number) => {
+    const line = out[k]!;
+    // Slide a label sideways into the bounds rather than lose a spot next to its bar.
+    line.x = Math.min(Math.max(x, bounds.x), bounds.x + bounds.w - r.w);
+    line.y0 = y0;
+    line.dir = dir;
+    line.extra = extra;
+  };
   if (r.prefer === 'beside') {
-    return [[right, 1, 0], [right, -1, 0], [left, 1, otherSide], [left, -1, otherSide], [spot(r, 'above', gap), -1, beside], [spot(r, 'below', gap), 1, beside]];
+    set(0, right, level, 1, 0);
+    set(1, right, level, -1, 0);
+    set(2, left, level, 1, otherSide);
+    set(3, left, level, -1, otherSide);
+    set(4, centre, above, -1, beside);
+    set(5, centre, below, 1, beside);
+    return;
   }
-  const other = r.prefer === 'above' ? 'below' : 'above';
-  const dirOf = (where: 'above' | 'below') => (where === 'above' ? -1 : 1);
-  return [
-    [spot(r, r.prefer, gap), dirOf(r.prefer), 0],
-    [spot(r, other, gap), dirOf(other), otherSide],
-    [right, 1, beside], [right, -1, beside], [left, 1, beside], [left, -1, beside],
-  ];
+  const [near, far] = r.prefer === 'above' ? [above, below] : [below, above];
+  const dir = r.prefer === 'above' ? -1 : 1;
+  set(0, centre, near, dir, 0);
+  set(1, centre, far, dir === 1 ? -1 : 1, otherSide);
+  set(2, right, level, 1, beside);
+  set(3, right, level, -1, beside);
+  set(4, left, level, 1, beside);
+  set(5, left, level, -1, beside);
 }
 
 function spot(r: LabelRequest, where: 'above' | 'below', gap: number): Box {

@@ -4,6 +4,8 @@ import type { Scene } from '../../core/figure/scene.ts';
 import type { DocumentStore } from '../state/documentStore.svelte.ts';
 import { AXIS_LOCK_PX, dragEdit, type DragTarget } from './dragGesture.ts';
 import { levelLock } from './canvasInput.ts';
+import { labelBoxes } from './labelBoxes.ts';
+import { setLabelOffset } from '../../core/edit/layoutEdits.ts';
 import { markFrame, markWork } from './frameTiming.ts';
 import { levelKey, type SceneGeometry } from './sceneGeometry.ts';
 import type { LevelShift } from './shiftLevel.ts';
@@ -83,6 +85,7 @@ export class CanvasDrag {
       if (Math.hypot(dx, dy) < AXIS_LOCK_PX) return;
       g.axis = Math.abs(dy) >= Math.abs(dx) ? 'y' : 'x';
     }
+    if (g.target.role === 'label' && !g.target.labelFrom) g.target = { ...g.target, labelFrom: this.#labelFrom(g) };
     const level = g.target.role === 'level' && g.axis === 'y';
     if (level && g.blocked) { this.note = `Dragging is off: ${g.blocked}.`; return; }
     const dyMm = dy / g.pxPerMm;
@@ -110,6 +113,24 @@ export class CanvasDrag {
     this.ahead = null;
     this.#gesture = null;
     this.dragging = false;
+  }
+
+  /**
+   * Where the label is drawn now, as an offset from its default spot. A label the layout
+   * moved away to clear others has no offset yet; starting from zero would make it jump
+   * back, so the default spot is found by pinning it there once (inside the drag's undo step).
+   */
+  #labelFrom(g: Gesture): { dx: number; dy: number } {
+    const { pathway, point } = g.target;
+    const own = g.start.pathways.find((p) => p.id === pathway)?.points.find((p) => p.id === point)?.labelOffsetMm;
+    if (own) return own;
+    const key = levelKey(pathway, point);
+    const drawn = labelBoxes(this.#view().scene).find((b) => b.key === key);
+    if (!drawn) return { dx: 0, dy: 0 };
+    this.#store.apply(setLabelOffset(g.start, { pathway, point, offset: { dx: 0, dy: 0 } }), { group: `drag:${g.id}`, windowMs: Number.POSITIVE_INFINITY });
+    flushSync();
+    const home = labelBoxes(this.#view().scene).find((b) => b.key === key);
+    return home ? { dx: drawn.x - home.x, dy: drawn.y - home.y } : { dx: 0, dy: 0 };
   }
 
   #commit(g: Gesture, next: Document, dyMm: number): void {

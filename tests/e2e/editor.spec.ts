@@ -4,7 +4,7 @@
 import { expect, test } from '@playwright/test';
 import { readFileSync } from 'node:fs';
 import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
-import { centreY, consoleErrors, dragBy, level, openEditor, pointRow } from './editorHelpers.ts';
+import { centreY, consoleErrors, dragBy, level, openEditor, pasteSpecies, pointRow } from './editorHelpers.ts';
 
 const demoText = readFileSync(new URL('../../assets/demo/demo.passline', import.meta.url), 'utf8');
 const CAT = 'Catalysed (LA)';
@@ -198,4 +198,82 @@ test('a dropped file of a newer format is refused with a message and the documen
   await expect(alert).toContainText('format version 99');
   await expect(page.getByRole('heading', { level: 1 })).not.toHaveText('From the future');
   await expect(page.getByRole('table', { name: 'Thermal', exact: true })).toBeVisible();
+});
+
+test('every label starts its drag from where it is drawn, even one the layout moved aside', async ({ page }) => {
+  const labels = page.locator('svg.overlay rect.label-hit');
+  const count = await labels.count();
+  expect(count).toBeGreaterThan(5);
+  for (let i = 0; i < count; i++) {
+    const label = labels.nth(i);
+    const before = (await label.boundingBox())!;
+    await dragBy(page, label, 0, 12);
+    const after = (await label.boundingBox())!;
+    // A 12 px drag moves the label 12 px down and not sideways (offsets kept to 0.1 mm).
+    expect(Math.abs(after.x - before.x)).toBeLessThan(3);
+    expect(Math.abs(after.y - before.y - 12)).toBeLessThan(3);
+  }
+});
+
+test('a point is given a composition from the species sheet; a bad count is reported in place', async ({ page }) => {
+  await page.getByRole('tab', { name: /Species/ }).click();
+  await pasteSpecies(page, 'id\tlabel\tE\nla\tLA\t-1205.512\nae\tAE\t-441.207\n');
+  await expect(page.getByRole('tab', { name: 'Species (2)' })).toBeVisible();
+  await page.getByRole('tab', { name: 'Mechanism' }).click();
+  const row = pointRow(page, CAT, 0);
+  await row.getByRole('button', { name: 'LA + AE composition' }).click();
+  await row.getByRole('combobox', { name: 'LA + AE composition species' }).selectOption({ label: 'LA' });
+  await row.getByRole('button', { name: 'Add to LA + AE' }).click();
+  await row.getByRole('combobox', { name: 'LA + AE composition species' }).selectOption({ label: 'AE' });
+  await row.getByRole('button', { name: 'Add to LA + AE' }).click();
+  await expect(row.getByRole('list', { name: 'LA + AE composition terms' })).toHaveText(/1 × LA\s*×?\s*1 × AE/);
+  await row.getByRole('textbox', { name: 'LA + AE composition count' }).fill('-1');
+  await row.getByRole('button', { name: 'Add to LA + AE' }).click();
+  await expect(row.getByRole('alert')).toHaveText('composition term 3: the count of ae must be a positive number, got -1');
+  await row.getByRole('button', { name: 'Remove AE from LA + AE' }).click();
+  await expect(row.getByRole('list', { name: 'LA + AE composition terms' })).toHaveText(/^1 × LA/);
+});
+
+test('an Eyring-plot estimate takes (T, k) rows typed in its table', async ({ page }) => {
+  const row = pointRow(page, CAT, 2);
+  await row.getByRole('combobox', { name: 'TS1 energy given as' }).selectOption('estimate');
+  await row.getByRole('combobox', { name: 'TS1 estimate method' }).selectOption('eyringFit');
+  const table = row.getByRole('table', { name: 'TS1 Eyring plot data' });
+  await expect(table.getByRole('textbox', { name: 'TS1 T, row 2' })).toHaveValue('318.15');
+  await table.getByRole('textbox', { name: 'TS1 k, row 1' }).fill('0');
+  await expect(table.getByRole('alert')).toHaveText('expected a positive rate constant in s⁻¹');
+  await table.getByRole('textbox', { name: 'TS1 k, row 1' }).fill('2e-3');
+  await row.getByRole('button', { name: 'Add a (T, k) row to TS1' }).click();
+  await expect(table.getByRole('textbox', { name: 'TS1 T, row 3' })).toHaveValue('328.15');
+  await table.getByRole('button', { name: 'Remove row 1 of TS1 Eyring plot data' }).click();
+  await expect(table.getByRole('textbox', { name: 'TS1 T, row 1' })).toHaveValue('318.15');
+  await expect(table.getByRole('button', { name: 'Remove row 1 of TS1 Eyring plot data' })).toBeDisabled();
+});
+
+test('the Figure tab adds a barrier arrow, the span bracket of the cycle and free text, and removes them', async ({ page }) => {
+  await page.getByRole('tab', { name: 'Figure' }).click();
+  await page.getByRole('combobox', { name: 'Pathway', exact: true }).selectOption({ label: CAT });
+  await page.getByRole('combobox', { name: 'Arrow from', exact: true }).selectOption({ label: 'LA·AE' });
+  await page.getByRole('combobox', { name: 'to', exact: true }).selectOption({ label: 'TS1' });
+  await page.getByRole('button', { name: 'Add annotation' }).click();
+  const list = page.getByRole('list', { name: 'Annotations on the figure' });
+  await expect(list).toContainText(`Barrier arrow LA·AE → TS1 (${CAT})`);
+  // The arrow is labelled with TS1 − LA·AE = 21.1 kcal/mol (the demo's typed barrier).
+  await expect(page.locator('section.canvas svg.scene')).toContainText('21.1');
+  await page.getByRole('combobox', { name: 'New annotation', exact: true }).selectOption('span');
+  await page.getByRole('combobox', { name: 'Pathway', exact: true }).selectOption({ label: 'Thermal' });
+  await expect(page.getByRole('status').filter({ hasText: 'catalytic cycle' })).toHaveText('pathway "Thermal" is not marked as a catalytic cycle');
+  await page.getByRole('combobox', { name: 'Pathway', exact: true }).selectOption({ label: 'LA cycle (cycle)' });
+  await page.getByRole('button', { name: 'Add annotation' }).click();
+  await expect(list).toContainText('Energetic span of LA cycle');
+  await page.getByRole('combobox', { name: 'New annotation', exact: true }).selectOption('text');
+  await page.getByRole('textbox', { name: 'Text', exact: true }).fill('Lewis acid lowers TS1');
+  await page.getByRole('textbox', { name: 'Text x (slots)' }).fill('2');
+  await page.getByRole('textbox', { name: 'Text y (kcal mol⁻¹)' }).fill('28');
+  await page.getByRole('button', { name: 'Add annotation' }).click();
+  await expect(page.locator('section.canvas svg.scene')).toContainText('Lewis acid lowers TS1');
+  await expect(list.getByRole('listitem')).toHaveCount(3);
+  await page.getByRole('button', { name: /^Remove annotation 3: Text/ }).click();
+  await expect(list.getByRole('listitem')).toHaveCount(2);
+  await expect(page.locator('section.canvas svg.scene')).not.toContainText('Lewis acid lowers TS1');
 });

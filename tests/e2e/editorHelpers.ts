@@ -44,6 +44,15 @@ export async function centreY(target: ReturnType<Page['locator']>): Promise<numb
   return box.y + box.height / 2;
 }
 
+/** Pastes a tab-separated block into the species sheet's paste field (the Species tab must be open). */
+export async function pasteSpecies(page: Page, text: string): Promise<void> {
+  await page.getByRole('textbox', { name: 'Paste a block as new species' }).evaluate((el, t) => {
+    const data = new DataTransfer();
+    data.setData('text/plain', t);
+    el.dispatchEvent(new ClipboardEvent('paste', { clipboardData: data, bubbles: true, cancelable: true }));
+  }, text);
+}
+
 function escape(text: string): string {
   return text.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
 }

@@ -9,6 +9,7 @@ describe('MechanismPanel: composition and rate data', () => {
     // Composition terms as the document format defines them (core/model/schema.ts Point.composition).
     const store = routeStore();
     render(MechanismPanel, { store });
+    await fireEvent.click(screen.getByRole('button', { name: 'A composition' }));
     await fireEvent.input(screen.getByRole('textbox', { name: 'A composition count' }), { target: { value: '2' } });
     await fireEvent.change(screen.getByRole('combobox', { name: 'A composition species' }), { target: { value: 'sa' } });
     await fireEvent.click(screen.getByRole('button', { name: 'Add to A' }));
@@ -21,6 +22,7 @@ describe('MechanismPanel: composition and rate data', () => {
   it('a count that is not a positive number is reported in place and nothing changes', async () => {
     const store = routeStore();
     render(MechanismPanel, { store });
+    await fireEvent.click(screen.getByRole('button', { name: 'B composition' }));
     await fireEvent.input(screen.getByRole('textbox', { name: 'B composition count' }), { target: { value: '0' } });
     await fireEvent.click(screen.getByRole('button', { name: 'Add to B' }));
     expect(screen.getByRole('alert').textContent).toBe('composition term 1: the count of sa must be a positive number, got 0');

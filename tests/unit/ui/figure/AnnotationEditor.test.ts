@@ -10,8 +10,8 @@ describe('AnnotationEditor (Figure tab)', () => {
   it('adds a barrier arrow between two chosen points, lists it and removes it', async () => {
     const store = routeStore();
     render(FigureOptions, { store });
-    await fireEvent.change(screen.getByRole('combobox', { name: 'From' }), { target: { value: 'a' } });
-    await fireEvent.change(screen.getByRole('combobox', { name: 'To' }), { target: { value: 't' } });
+    await fireEvent.change(screen.getByRole('combobox', { name: 'Arrow from' }), { target: { value: 'a' } });
+    await fireEvent.change(screen.getByRole('combobox', { name: 'to' }), { target: { value: 't' } });
     await fireEvent.click(screen.getByRole('button', { name: 'Add annotation' }));
     expect(store.doc.figure.annotations).toEqual([{ type: 'barrier', pathway: 'p', from: 'a', to: 't' }]);
     expect(within(list()).getByText(/Barrier arrow A → TS \(Route\)/)).toBeTruthy();
@@ -27,7 +27,7 @@ describe('AnnotationEditor (Figure tab)', () => {
     // Energetic span is defined for catalytic cycles (Kozuch & Shaik, Acc. Chem. Res. 2011, 44, 101).
     const store = routeStore();
     render(FigureOptions, { store });
-    await fireEvent.change(screen.getByRole('combobox', { name: 'Add' }), { target: { value: 'span' } });
+    await fireEvent.change(screen.getByRole('combobox', { name: 'New annotation' }), { target: { value: 'span' } });
     expect(screen.getByRole('status').textContent).toBe('pathway "Route" is not marked as a catalytic cycle');
     store.apply(setCycle(store.doc, { pathway: 'p', cycle: true }));
     await fireEvent.click(await screen.findByRole('button', { name: 'Add annotation' }));
@@ -37,7 +37,7 @@ describe('AnnotationEditor (Figure tab)', () => {
   it('adds free text at x in slots and y in the display unit', async () => {
     const store = routeStore();
     render(FigureOptions, { store });
-    await fireEvent.change(screen.getByRole('combobox', { name: 'Add' }), { target: { value: 'text' } });
+    await fireEvent.change(screen.getByRole('combobox', { name: 'New annotation' }), { target: { value: 'text' } });
     await fireEvent.input(screen.getByRole('textbox', { name: 'Text' }), { target: { value: 'slow step' } });
     const x = screen.getByRole('textbox', { name: 'Text x (slots)' });
     await fireEvent.focus(x);

@@ -16,14 +16,13 @@ export interface SpotSearch {
   hard: BoxIndex;
   columns: ColumnIndex;
   soft: BoxIndex;
-  /** Blocked runs of the columns met in the current search. */
+  /** Blocked runs of the lines met in the current search. */
   runs: BlockedRuns[];
-  runX: number[];
 }
 
 /** A search over the given indexes. */
 export function spotSearch(hard: BoxIndex, columns: ColumnIndex, soft: BoxIndex): SpotSearch {
-  return { hard, columns, soft, runs: [], runX: [] };
+  return { hard, columns, soft, runs: [] };
 }
 
 /**
@@ -32,7 +31,7 @@ export function spotSearch(hard: BoxIndex, columns: ColumnIndex, soft: BoxIndex)
  * `gap`, it touches no hard box and lies inside `bounds`. Its cost is the distance plus
  * the line's extra, plus h when it crosses a soft box; a tie goes to the nearer spot, then
  * to the earlier line. Blocked stretches of a line are skipped whole, using the blocked
- * runs of its column; every spot taken is confirmed by an exact test. Undefined when no
+ * runs of its column ahead of it; every spot taken is confirmed by an exact test. Undefined when no
  * spot is clear.
  */
 export function cheapestSpot(lines: readonly SpotLine[], w: number, h: number, bounds: Box, gap: number, step: number, limit: number, at: SpotSearch): { box: Box; distance: number } | undefined {
@@ -42,12 +41,11 @@ export function cheapestSpot(lines: readonly SpotLine[], w: number, h: number, b
   let bestI = -1;
   let bestY = 0;
   let bestX = 0;
-  let columns = 0;
+  let used = 0;
   for (const line of lines) {
     const { x, y0, dir, extra } = line;
     if (x < bounds.x || x + w > bounds.x + bounds.w) continue;
     let runs: BlockedRuns | undefined;
-    for (let c = 0; c < columns; c++) if (at.runX[c] === x) runs = at.runs[c];
     let i = 0;
     while (i <= limit) {
       const d = i * step;
@@ -63,10 +61,12 @@ export function cheapestSpot(lines: readonly SpotLine[], w: number, h: number, b
       let k = runs ? runAt(runs, y) : -1;
       if (k < 0 && at.hard.hitsAt(x, y, w, h, gap)) {
         if (!runs) {
-          if (columns === at.runs.length) at.runs.push(blockedRuns());
-          runs = at.runs[columns]!;
-          at.runX[columns++] = x;
-          at.columns.blocked(x, w, h, gap, top, bottom - h, runs);
+          // Only the stretch of the line still ahead, as far as a spot could still win.
+          const reach = y0 + dir * (bestCost - extra);
+          if (used === at.runs.length) at.runs.push(blockedRuns());
+          runs = at.runs[used++]!;
+          if (dir > 0) at.columns.blocked(x, w, h, gap, y, Math.min(bottom - h, reach), runs);
+          else at.columns.blocked(x, w, h, gap, Math.max(top, reach), y, runs);
           k = runAt(runs, y);
         }
         if (k < 0) {

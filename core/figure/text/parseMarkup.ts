@@ -4,6 +4,9 @@ export interface Span {
   shift: 'base' | 'sub' | 'sup';
 }
 
+/** The characters that start markup. */
+const PLAIN_BREAK = /[\\_^]/;
+
 /**
  * Passline label markup — small on purpose:
  *
@@ -16,6 +19,8 @@ export interface Span {
  * at the end is kept as text. Parsing never fails.
  */
 export function parseMarkup(source: string): Span[] {
+  // Most labels have no markup at all: one baseline span, as the loop below would give.
+  if (!PLAIN_BREAK.test(source)) return source ? [{ text: source, shift: 'base' }] : [];
   const spans: Span[] = [];
   const push = (text: string, shift: Span['shift']) => {
     if (!text) return;

@@ -40,7 +40,9 @@ export function columnIndex(stripMm: number): ColumnIndex {
   let at = new Int32Array(8);
   let end = new Int32Array(8);
   return {
-    add(box) {
+    add(original) {
+      // A private copy: every box in the strips then has one shape, which keeps the merge fast.
+      const box: Box = { x: original.x, y: original.y, w: original.w, h: original.h };
       tallest = Math.max(tallest, box.h);
       for (let i = strip(box.x); i <= strip(box.x + box.w); i++) {
         const list = strips.get(i);
@@ -76,35 +78,43 @@ function mergeRuns(lists: readonly Box[][], at: Int32Array, end: Int32Array, cou
   for (;;) {
     let pick = -1;
     let pickY = Infinity;
+    let b: Box | undefined;
     for (let k = 0; k < count; k++) {
-      if (at[k]! >= end[k]!) continue;
-      const y = lists[k]![at[k]!]!.y;
-      if (y < pickY) {
+      const i = at[k]!;
+      if (i >= end[k]!) continue;
+      const head = lists[k]![i]!;
+      if (head.y < pickY) {
         pick = k;
-        pickY = y;
+        pickY = head.y;
+        b = head;
       }
     }
-    if (pick < 0) return;
-    const b = lists[pick]![at[pick]!]!;
+    if (!b) return;
     at[pick]!++;
-    if (!(x < b.x + b.w + margin && b.x < x + w + margin)) continue;
-    const top = b.y - h - margin;
-    const bottom = b.y + b.h + margin;
+    const left = b.x;
+    if (!(x < left + b.w + margin && left < x + w + margin)) continue;
+    const top = pickY - h - margin;
+    const bottom = pickY + b.h + margin;
     const n = out.n;
     // Join only with a clear overlap, so a point near a joint is deep inside one of the two.
-    if (n > 0 && top < out.hi[n - 1]! - 2 * RUN_EPS) out.hi[n - 1] = Math.max(out.hi[n - 1]!, bottom);
-    else {
-      if (n === out.lo.length) {
-        const [lo, hi] = [new Float64Array(2 * n), new Float64Array(2 * n)];
-        lo.set(out.lo);
-        hi.set(out.hi);
-        [out.lo, out.hi] = [lo, hi];
-      }
+    if (n > 0 && top < out.hi[n - 1]! - 2 * RUN_EPS) {
+      if (bottom > out.hi[n - 1]!) out.hi[n - 1] = bottom;
+    } else {
+      if (n === out.lo.length) grow(out);
       out.lo[n] = top;
       out.hi[n] = bottom;
       out.n = n + 1;
     }
   }
+}
+
+function grow(out: BlockedRuns): void {
+  const lo = new Float64Array(2 * out.lo.length);
+  const hi = new Float64Array(2 * out.lo.length);
+  lo.set(out.lo);
+  hi.set(out.hi);
+  out.lo = lo;
+  out.hi = hi;
 }
 
 /** Index of the first box (sorted by top edge) whose top lies below y, or at y too unless `strict`. */

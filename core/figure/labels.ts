@@ -1,3 +1,4 @@
+import type { LayoutPoint } from './collectPoints.ts';
 import type { FigureContext } from './figureContext.ts';
 import { blockItems, labelBlock, type LabelBlock, type LabelStyle } from './labelBlock.ts';
 import { barBox, type PlacedLevel } from './levels.ts';
@@ -20,10 +21,11 @@ interface Group {
  * name and printed energy (a state shared by several pathways) get one label in ink.
  * Placed in slot order, then pathway order, away from every bar and each other, and
  * off the connectors where a spot near the bar allows. Annotation labels (`extra`) are
- * placed after them, by the same rules, beside their arrows.
+ * placed after them, by the same rules, beside their arrows. `measured` holds blocks
+ * already built for some points (with this same style), so they are not built twice.
  * Returns the items and the label boxes (for tests and hit-testing).
  */
-export function labels(ctx: FigureContext, placed: readonly PlacedLevel[], paints: ReadonlyMap<number, PathwayPaint>, bounds: Box, soft: readonly Box[], extra: { hard: readonly Box[]; labels: readonly AnnotationLabel[] } = { hard: [], labels: [] }): { items: SceneItem[]; boxes: Box[]; annotationBoxes: Box[] } {
+export function labels(ctx: FigureContext, placed: readonly PlacedLevel[], paints: ReadonlyMap<number, PathwayPaint>, bounds: Box, soft: readonly Box[], extra: { hard: readonly Box[]; labels: readonly AnnotationLabel[] } = { hard: [], labels: [] }, measured: ReadonlyMap<LayoutPoint, LabelBlock> = new Map()): { items: SceneItem[]; boxes: Box[]; annotationBoxes: Box[] } {
   const style: LabelStyle = {
     metrics: ctx.metrics, sizeMm: ctx.sizeMm, decimals: ctx.doc.settings.decimals,
     energyFormat: ctx.doc.figure.energyFormat, unit: ctx.unit, daggerOnTs: ctx.doc.figure.daggerOnTs, autoSubscript: ctx.autoSubscript,
@@ -32,7 +34,7 @@ export function labels(ctx: FigureContext, placed: readonly PlacedLevel[], paint
   const groups: Group[] = [];
   const byKey = new Map<string, Group[]>();
   for (const level of order) {
-    const block = labelBlock(level.point.label, level.point.kind, level.point.energy!, style);
+    const block = measured.get(level.point) ?? labelBlock(level.point.label, level.point.kind, level.point.energy!, style);
     const key = `${level.x.toFixed(4)}|${level.point.label}|${block.energyText}`;
     const twin = byKey.get(key)?.find((g) => Math.abs(g.level.y - level.y) < 0.5 * ctx.strokeMm);
     if (twin) twin.shared = true;

@@ -60,7 +60,8 @@ export function layoutFigure(profile: ResolvedProfile, doc: Document, options: L
 
   // Room for a label above the highest and below the lowest level.
   const style = { ...ctx, decimals: doc.settings.decimals, energyFormat: fig.energyFormat, daggerOnTs: fig.daggerOnTs };
-  const tallest = Math.max(0, ...known.slice(0, 200).map((q) => labelBlock(q.label, q.kind, q.energy, style).h));
+  const measured = new Map(known.slice(0, 200).map((q) => [q, labelBlock(q.label, q.kind, q.energy, style)] as const));
+  const tallest = Math.max(0, ...[...measured.values()].map((b) => b.h));
   const pad = tallest + 3 * ctx.gapMm;
   const plans = planAnnotations(profile, doc, pathways).plans;
   const scale = energyScale([...known.map((q) => q.energy), ...planEnergies(plans)], y1 - pad, y0 + pad);
@@ -92,7 +93,7 @@ export function layoutFigure(profile: ResolvedProfile, doc: Document, options: L
   items.push(...marks.items);
   // Labels may reach into the right margin, never over the axis.
   const labelBounds = { ...plot, w: size.widthMm - ctx.gapMm - plot.x };
-  items.push(...labels(ctx, placed, paintByIndex, labelBounds, [...soft, ...marks.soft], marks).items);
+  items.push(...labels(ctx, placed, paintByIndex, labelBounds, [...soft, ...marks.soft], marks, measured).items);
   items.push(...key.items);
   if (fig.showCoordinateArrow) items.push(...coordinateArrow(ctx, plot.x, x1, y1 + margin / 2));
   return { widthMm: size.widthMm, heightMm: size.heightMm, background: theme.background, fontFamily: options.metrics.family, items };

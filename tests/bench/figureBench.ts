@@ -39,8 +39,8 @@ const profile: ResolvedProfile = {
   })) })),
 };
 
-/** Median wall and CPU (user + system) time of `runs` runs after `warm` warm-up runs, ms. */
-async function median(runs: number, task: () => unknown, warm = 5): Promise<{ wall: number; cpu: number }> {
+/** Median wall and CPU (user + system) time of `runs` runs after `warm` warm-up runs, ms (enough warm-up for V8 to finish optimising, so the numbers are steady-state). */
+async function median(runs: number, task: () => unknown, warm = 30): Promise<{ wall: number; cpu: number }> {
   for (let w = 0; w < warm; w++) await task();
   const walls: number[] = [];
   const cpus: number[] = [];
@@ -57,7 +57,7 @@ async function median(runs: number, task: () => unknown, warm = 5): Promise<{ wa
 }
 const show = (t: { wall: number; cpu: number }) => `${t.wall.toFixed(1)} ms wall (${t.cpu.toFixed(1)} ms CPU)`;
 
-const svg = await median(15, () => sceneToSvg(layoutFigure(profile, doc, { metrics })));
+const svg = await median(31, () => sceneToSvg(layoutFigure(profile, doc, { metrics })));
 const scene = layoutFigure(profile, doc, { metrics });
 const pdf = await median(7, () => sceneToPdf(scene, { fontBytes, subsetFont: subsetFontNode }), 2);
 const pdfBytes = (await sceneToPdf(scene, { fontBytes, subsetFont: subsetFontNode })).length;

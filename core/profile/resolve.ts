@@ -43,6 +43,8 @@ export function resolveProfile(doc: Document): ResolvedProfile {
   const ctx = makeContext(doc);
   const findings: Finding[] = [];
   const raws = doc.pathways.map((pathway) => resolvePathwayRaw(pathway, ctx, findings));
+  // Points that already have an error get no second "missing energy" finding (a set: huge documents stay linear).
+  const erred = new Set(findings.filter((f) => f.severity === 'error').map((f) => `${f.pathway}\u0000${f.point}`));
   const pathways: ResolvedPathway[] = doc.pathways.map((pathway, pi) => {
     const reference = referenceFor(doc, pi, raws);
     return {
@@ -56,12 +58,15 @@ export function resolveProfile(doc: Document): ResolvedProfile {
         if (raw.valueJ !== null && reference && reference.raw.raw.valueJ !== null) {
           const base = referenceValue(raw.scale, reference, ctx);
           if (base !== null) energyJ = raw.valueJ - base;
-          else findings.push({
-            severity: 'error', code: 'no-common-reference', ...where,
-            message: `this point is on the ${raw.scale} scale but the reference "${reference.point.label}" is on the ${reference.raw.raw.scale} scale${raw.scale === 'formation' ? ' and has no composition with formation data' : ''}; they cannot be subtracted`,
-          });
+          else {
+            erred.add(`${pathway.id}\u0000${point.id}`);
+            findings.push({
+              severity: 'error', code: 'no-common-reference', ...where,
+              message: `this point is on the ${raw.scale} scale but the reference "${reference.point.label}" is on the ${reference.raw.raw.scale} scale${raw.scale === 'formation' ? ' and has no composition with formation data' : ''}; they cannot be subtracted`,
+            });
+          }
         }
-        if (energyJ === null && !findings.some((f) => f.point === point.id && f.pathway === pathway.id && f.severity === 'error')) {
+        if (energyJ === null && !erred.has(`${pathway.id}\u0000${point.id}`)) {
           findings.push({ severity: 'error', code: 'missing-energy', ...where, message: `no energy could be resolved for "${point.label}"` });
         }
         return { id: point.id, label: point.label, kind: point.kind, energyJ, provenance };

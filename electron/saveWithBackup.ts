@@ -1,6 +1,4 @@
-import { copyFile, open, rename, unlink } from 'node:fs/promises';
-import { basename, dirname, join } from 'node:path';
-import { randomBytes } from 'node:crypto';
+import { readFile } from 'node:fs/promises';
 import { atomicWrite } from '../core/io/atomicWrite.node.ts';
 
 /**
@@ -12,28 +10,16 @@ export function backupPathOf(target: string): string {
   return `${target}.bak`;
 }
 
-/** Copies `source` to `destination` so that `destination` is always one whole version. */
+/** Copies `source` to `destination` atomically (whole old version or nothing); false when there is no source yet. */
 async function atomicCopy(source: string, destination: string): Promise<boolean> {
-  const temp = join(dirname(destination), `.${basename(destination)}.${randomBytes(6).toString('hex')}.tmp`);
+  let previous: Uint8Array;
   try {
-    await copyFile(source, temp);
+    previous = await readFile(source);
   } catch (error) {
-    await unlink(temp).catch(() => undefined);
     if ((error as NodeJS.ErrnoException).code === 'ENOENT') return false;
     throw error;
   }
-  try {
-    const handle = await open(temp, 'r+');
-    try {
-      await handle.sync();
-    } finally {
-      await handle.close();
-    }
-    await rename(temp, destination);
-  } catch (error) {
-    await unlink(temp).catch(() => undefined);
-    throw error;
-  }
+  await atomicWrite(destination, previous);
   return true;
 }
 

@@ -5,28 +5,27 @@ import type { Document, Pathway, Point } from '../model/schema.ts';
  * missing or `fn` returns it unchanged, so callers can ask "did anything change?" by identity.
  */
 export function mapPathway(doc: Document, pathwayId: string, fn: (pathway: Pathway) => Pathway): Document {
-  const index = doc.pathways.findIndex((p) => p.id === pathwayId);
-  if (index < 0) return doc;
-  const before = doc.pathways[index]!;
-  const after = fn(before);
-  if (after === before) return doc;
-  const pathways = doc.pathways.slice();
-  pathways[index] = after;
-  return { ...doc, pathways };
+  const pathways = replaceById(doc.pathways, pathwayId, fn);
+  return pathways === doc.pathways ? doc : { ...doc, pathways };
 }
 
 /** Replaces one point of one pathway by `fn(point)`, keeping identity when nothing changes. */
 export function mapPoint(doc: Document, pathwayId: string, pointId: string, fn: (point: Point) => Point): Document {
   return mapPathway(doc, pathwayId, (pathway) => {
-    const index = pathway.points.findIndex((p) => p.id === pointId);
-    if (index < 0) return pathway;
-    const before = pathway.points[index]!;
-    const after = fn(before);
-    if (after === before) return pathway;
-    const points = pathway.points.slice();
-    points[index] = after;
-    return { ...pathway, points };
+    const points = replaceById(pathway.points, pointId, fn);
+    return points === pathway.points ? pathway : { ...pathway, points };
   });
+}
+
+/** The array with the item of that id replaced by `fn(item)`; the same array when it is missing or unchanged. */
+function replaceById<T extends { id: string }>(items: T[], id: string, fn: (item: T) => T): T[] {
+  const index = items.findIndex((item) => item.id === id);
+  if (index < 0) return items;
+  const after = fn(items[index]!);
+  if (after === items[index]) return items;
+  const copy = items.slice();
+  copy[index] = after;
+  return copy;
 }
 
 /** Moves the item at `from` to `to` (clamped); the same array when the move is a no-op. */

@@ -1,5 +1,6 @@
 import type { Document } from '../model/schema.ts';
 import { analyseDocument } from './analyseDocument.ts';
+import { spaced } from '../kinetics/temperatureScan.ts';
 
 /** One series over temperature; null where the value cannot be had at that temperature. */
 export interface ScanSeries {
@@ -31,7 +32,7 @@ function approximationOf(doc: Document, pathwayIndex: number): string {
  * held, which is the usual approximation and is stated.
  */
 export function scanDocument(doc: Document, startK: number, endK: number, count: number): DocumentScan {
-  const temperaturesK = Array.from({ length: count }, (_, i) => (count === 1 ? startK : startK + ((endK - startK) * i) / (count - 1)));
+  const temperaturesK = spaced({ startK, endK, count });
   const byName = new Map<string, ScanSeries>();
   const put = (name: string, unit: string, k: number, value: number | null) => {
     const series = byName.get(name) ?? { name, unit, values: new Array<number | null>(count).fill(null) };

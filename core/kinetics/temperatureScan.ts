@@ -69,7 +69,8 @@ function checkRange({ startK, endK, count }: ScanRange): Finding[] {
   return [];
 }
 
-function spaced({ startK, endK, count }: ScanRange): number[] {
+/** `count` evenly spaced temperatures from `startK` to `endK` inclusive (just `startK` when count is 1). */
+export function spaced({ startK, endK, count }: ScanRange): number[] {
   return Array.from({ length: count }, (_, i) => (count === 1 ? startK : startK + ((endK - startK) * i) / (count - 1)));
 }
 

@@ -9,19 +9,20 @@ export type KnownPoint = LayoutPoint & { energy: number };
 
 /**
  * An annotation resolved to drawn points and display-unit energies, before any geometry.
+ * `annotation` is its index in `doc.figure.annotations` (from 0).
  * Free text: `slot` is in slot units (0 = the first slot, as a point's `x`), `energy` in the
  * profile's display unit; the text is centred there.
  */
 export type AnnotationPlan =
-  | { kind: 'barrier'; from: KnownPoint; to: KnownPoint; value: number }
+  | { kind: 'barrier'; annotation: number; from: KnownPoint; to: KnownPoint; value: number }
   | {
-    kind: 'span'; pathwayId: string; tdi: KnownPoint; tdts: KnownPoint; tdtsLabel: string;
+    kind: 'span'; annotation: number; pathwayId: string; tdi: KnownPoint; tdts: KnownPoint; tdtsLabel: string;
     /** Energies of the bracket's ends: the TDI, and the TDTS (of the next turnover when `wrap`). */
     low: number; high: number; deltaE: number;
     /** True when the TDTS comes before the TDI: the bracket reaches the TDTS of the next turnover, T + ΔG_r. */
     wrap: boolean;
   }
-  | { kind: 'text'; text: string; slot: number; energy: number };
+  | { kind: 'text'; annotation: number; text: string; slot: number; energy: number };
 
 /**
  * Resolves `doc.figure.annotations` against the drawn pathways. An annotation that names
@@ -38,7 +39,7 @@ export function planAnnotations(profile: ResolvedProfile, doc: Document, pathway
     const fail = (code: string, message: string, pathway?: string, point?: string) =>
       findings.push({ severity: 'warning', code, message: `${where}: ${message}; it is not drawn`, ...(pathway ? { pathway } : {}), ...(point ? { point } : {}) });
     if (a.type === 'text') {
-      plans.push({ kind: 'text', text: a.text, slot: a.x, energy: a.y });
+      plans.push({ kind: 'text', annotation: n, text: a.text, slot: a.x, energy: a.y });
       return;
     }
     const drawn = pathways.find((p) => p.id === a.pathway);
@@ -57,7 +58,7 @@ export function planAnnotations(profile: ResolvedProfile, doc: Document, pathway
       const to = known(a.to);
       if (typeof from === 'string') return fail('annotation-point', from, a.pathway, a.from);
       if (typeof to === 'string') return fail('annotation-point', to, a.pathway, a.to);
-      plans.push({ kind: 'barrier', from, to, value: to.energy - from.energy });
+      plans.push({ kind: 'barrier', annotation: n, from, to, value: to.energy - from.energy });
       return;
     }
     const resolved = profile.pathways.find((p) => p.id === a.pathway)!;
@@ -70,7 +71,7 @@ export function planAnnotations(profile: ResolvedProfile, doc: Document, pathway
     const tdts = known(tdtsId);
     if (typeof tdi === 'string' || typeof tdts === 'string') return fail('annotation-span', 'its TDI or TDTS is not drawn', a.pathway);
     const deltaE = fromJoulesPerMol(span.deltaEJ, unit);
-    plans.push({ kind: 'span', pathwayId: a.pathway, tdi, tdts, tdtsLabel: span.tdts.label, low: tdi.energy, high: tdi.energy + deltaE, deltaE, wrap: !span.tdtsAfterTdi });
+    plans.push({ kind: 'span', annotation: n, pathwayId: a.pathway, tdi, tdts, tdtsLabel: span.tdts.label, low: tdi.energy, high: tdi.energy + deltaE, deltaE, wrap: !span.tdtsAfterTdi });
   });
   return { plans, findings };
 }

@@ -11,10 +11,12 @@ import { layoutRichText, type RichLine } from './text/layoutRichText.ts';
 import { parseMarkup } from './text/parseMarkup.ts';
 import { textItem } from './text/textItem.ts';
 
-/** The label an arrow or bracket wants placed beside it. */
+/** The label an arrow or bracket wants placed beside it, with the annotation (index in `doc.figure.annotations`) and pathway it belongs to. */
 export interface AnnotationLabel {
   request: LabelRequest;
   lines: RichLine[];
+  annotation: number;
+  pathway: string;
 }
 
 /** Drawn annotations: marks, what point labels must avoid, and labels still to place. */
@@ -62,7 +64,8 @@ export function annotationShapes(ctx: FigureContext, plans: readonly AnnotationP
     const lines = annotationLines(plan, ctx);
     const w = Math.max(...lines.map((l) => l.width));
     const h = lines.reduce((s, l) => s + l.ascent + l.descent, 0);
-    out.labels.push({ request: { x, y: (y0 + y1) / 2, halfWidth, w, h, prefer: 'beside' }, lines });
+    const pathway = plan.kind === 'barrier' ? plan.from.pathwayId : plan.pathwayId;
+    out.labels.push({ request: { x, y: (y0 + y1) / 2, halfWidth, w, h, prefer: 'beside' }, lines, annotation: plan.annotation, pathway });
   };
   for (const plan of plans) {
     if (plan.kind === 'text') {

@@ -14,8 +14,6 @@ export interface BoxIndex {
   clearance(x: number, y: number, w: number, h: number, margin: number, dir: 1 | -1): number;
   /** The boxes that share interior area with `box`, each once, in the order added per cell. */
   touching(box: Box): Box[];
-  /** Smallest top edge of all boxes added (Infinity when empty). */
-  top(): number;
 }
 
 /** Uniform-grid index with square cells of `cellMm`; boxes are filed in every cell they cover. */
@@ -24,7 +22,6 @@ export function boxIndex(cellMm: number): BoxIndex {
   // Numeric cell keys (no string building on the hot path); rows wrap far beyond any figure.
   const key = (i: number, j: number) => i * 1_000_003 + j;
   const cell = (v: number) => Math.floor(v / cellMm);
-  let top = Infinity;
   const index: BoxIndex = {
     add(box) {
       for (let i = cell(box.x); i <= cell(box.x + box.w); i++) for (let j = cell(box.y); j <= cell(box.y + box.h); j++) {
@@ -33,7 +30,6 @@ export function boxIndex(cellMm: number): BoxIndex {
         if (list) list.push(box);
         else cells.set(k, [box]);
       }
-      top = Math.min(top, box.y);
     },
     hits: (b, margin) => index.hitsAt(b.x, b.y, b.w, b.h, margin),
     hitsAt(x, y, w, h, margin, except) {
@@ -64,7 +60,6 @@ export function boxIndex(cellMm: number): BoxIndex {
       }
       return [...found];
     },
-    top: () => top,
   };
   return index;
 }

@@ -7,7 +7,7 @@ import { placeLabels, type LabelRequest } from './placeLabels.ts';
 import { boxIndex, type BoxIndex } from './boxIndex.ts';
 import { eachPiece } from './pathPieces.ts';
 import type { AnnotationLabel } from './annotationShapes.ts';
-import type { Box, PathItem, SceneItem } from './scene.ts';
+import type { Box, OmittedLabel, PathItem, SceneItem } from './scene.ts';
 import { textItem } from './text/textItem.ts';
 
 interface Group {
@@ -23,9 +23,11 @@ interface Group {
  * off the connectors where a spot near the bar allows. Annotation labels (`extra`) are
  * placed after them, by the same rules, beside their arrows. `measured` holds blocks
  * already built for some points (with this same style), so they are not built twice.
- * Returns the items and the label boxes (for tests and hit-testing).
+ * A label with no clear spot inside `bounds` is left out (see placeLabels) and listed in
+ * `omitted`, in placement order. Returns the items and the drawn label boxes (for tests
+ * and hit-testing).
  */
-export function labels(ctx: FigureContext, placed: readonly PlacedLevel[], paints: ReadonlyMap<number, PathwayPaint>, bounds: Box, soft: readonly Box[], extra: { hard: readonly Box[]; labels: readonly AnnotationLabel[] } = { hard: [], labels: [] }, measured: ReadonlyMap<LayoutPoint, LabelBlock> = new Map()): { items: SceneItem[]; boxes: Box[]; annotationBoxes: Box[] } {
+export function labels(ctx: FigureContext, placed: readonly PlacedLevel[], paints: ReadonlyMap<number, PathwayPaint>, bounds: Box, soft: readonly Box[], extra: { hard: readonly Box[]; labels: readonly AnnotationLabel[] } = { hard: [], labels: [] }, measured: ReadonlyMap<LayoutPoint, LabelBlock> = new Map()): { items: SceneItem[]; boxes: Box[]; annotationBoxes: Box[]; omitted: OmittedLabel[] } {
   const style: LabelStyle = {
     metrics: ctx.metrics, sizeMm: ctx.sizeMm, decimals: ctx.doc.settings.decimals,
     energyFormat: ctx.doc.figure.energyFormat, unit: ctx.unit, daggerOnTs: ctx.doc.figure.daggerOnTs, autoSubscript: ctx.autoSubscript,
@@ -54,28 +56,42 @@ export function labels(ctx: FigureContext, placed: readonly PlacedLevel[], paint
   const all = placeLabels([...requests, ...extra.labels.map((l) => l.request)], { hard: [...placed.map((l) => barBox(l, ctx)), ...extra.hard], soft }, bounds, ctx.gapMm);
   const placements = all.slice(0, requests.length);
   const items: SceneItem[] = [];
-  const boxes = placements.map((p) => p.box);
+  const omitted: OmittedLabel[] = [];
+  const names = new Map(ctx.doc.pathways.map((p) => [p.id, p.name]));
+  const boxes = placements.filter((p) => p !== null).map((p) => p.box);
   const index = boxIndex(Math.max(2, ...boxes.slice(0, 50).map((b) => b.w)));
   boxes.forEach(index.add);
   groups.forEach((g, i) => {
-    const { box, displaced } = placements[i]!;
+    const placement = placements[i];
+    const { pathwayId: pathway, pointId: point, label } = g.level.point;
+    if (!placement) {
+      omitted.push({ kind: 'level', pathway, point, pathwayName: names.get(pathway) ?? pathway, label });
+      return;
+    }
+    const { box, displaced } = placement;
     const colour = g.shared ? ctx.theme.ink : paints.get(g.level.point.pathwayIndex)!.colour;
     const line = displaced ? leader(ctx, g.level, box) : null;
     // A leader that would cut through another label confuses more than it helps.
     if (line && !crossesOthers(line, index, box)) items.push(line);
-    items.push(...blockItems(g.block, box, ctx.theme.ink, colour, { pathway: g.level.point.pathwayId, point: g.level.point.pointId }));
+    items.push(...blockItems(g.block, box, ctx.theme.ink, colour, { pathway, point }));
   });
-  const annotationBoxes = all.slice(requests.length).map((p, k) => {
-    const { request, lines } = extra.labels[k]!;
+  const annotationBoxes: Box[] = [];
+  all.slice(requests.length).forEach((p, k) => {
+    const { request, lines, annotation, pathway } = extra.labels[k]!;
+    if (!p) {
+      const text = lines.map((l) => l.runs.map((r) => r.text).join('')).join(' ');
+      omitted.push({ kind: 'annotation', annotation, pathway, pathwayName: names.get(pathway) ?? pathway, text });
+      return;
+    }
     if (p.displaced) items.push(leaderLine(ctx, request.x, request.y, p.box));
     let top = p.box.y;
     for (const l of lines) {
       items.push(textItem(l, p.box.x, top + l.ascent, ctx.theme.ink, 'annotation'));
       top += l.ascent + l.descent;
     }
-    return p.box;
+    annotationBoxes.push(p.box);
   });
-  return { items, boxes, annotationBoxes };
+  return { items, boxes, annotationBoxes, omitted };
 }
 
 function crossesOthers(line: PathItem, index: BoxIndex, own: Box): boolean {

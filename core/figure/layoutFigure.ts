@@ -32,7 +32,8 @@ export interface LayoutOptions {
 
 /**
  * Lays a resolved profile out as a scene in mm: levels at shared slots, connectors,
- * labels placed clear of bars and of each other, y axis, reaction-coordinate arrow and
+ * labels placed clear of bars and of each other (those left no room on the page are left
+ * out and listed in `omittedLabels`), y axis, reaction-coordinate arrow and
  * legend, and the document's annotations (barrier arrows, energetic span brackets, free
  * text; see annotationPlans.ts and annotationShapes.ts; ones that cannot be drawn are left
  * out, and `annotationFindings` says why), all per the document's figure settings. Deterministic: the same inputs give
@@ -93,8 +94,9 @@ export function layoutFigure(profile: ResolvedProfile, doc: Document, options: L
   items.push(...marks.items);
   // Labels may reach into the right margin, never over the axis.
   const labelBounds = { ...plot, w: size.widthMm - ctx.gapMm - plot.x };
-  items.push(...labels(ctx, placed, paintByIndex, labelBounds, [...soft, ...marks.soft], marks, measured).items);
+  const placedLabels = labels(ctx, placed, paintByIndex, labelBounds, [...soft, ...marks.soft], marks, measured);
+  items.push(...placedLabels.items);
   items.push(...key.items);
   if (fig.showCoordinateArrow) items.push(...coordinateArrow(ctx, plot.x, x1, y1 + margin / 2));
-  return { widthMm: size.widthMm, heightMm: size.heightMm, background: theme.background, fontFamily: options.metrics.family, items };
+  return { widthMm: size.widthMm, heightMm: size.heightMm, background: theme.background, fontFamily: options.metrics.family, items, omittedLabels: placedLabels.omitted };
 }

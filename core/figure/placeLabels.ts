@@ -35,10 +35,11 @@ export interface Obstacles {
  * (for `beside`, right and left first) — and takes the cheapest whose box (grown by
  * `gap`) touches no bar and no label placed before it and lies inside `bounds`. Cost grows
  * with the distance; the non-preferred side, a spot off the preferred side and crossing a
- * soft obstacle (a connector) cost extra. If nothing fits inside, the label goes just
- * above everything (outside the bounds but still clear), so boxes never overlap.
+ * soft obstacle (a connector) cost extra. A label with no clear spot inside gets null: it
+ * is left out (and takes no room from later labels), so every placed box lies inside the
+ * bounds and no two overlap. A `fixed` label goes where the user put it, even outside.
  */
-export function placeLabels(requests: readonly LabelRequest[], obstacles: Obstacles, bounds: Box, gap: number, step = 0.5): Placement[] {
+export function placeLabels(requests: readonly LabelRequest[], obstacles: Obstacles, bounds: Box, gap: number, step = 0.5): (Placement | null)[] {
   const cell = Math.max(2, ...requests.slice(0, 50).map((r) => r.w));
   const hard = boxIndex(cell);
   const columns = columnIndex(cell);
@@ -52,10 +53,10 @@ export function placeLabels(requests: readonly LabelRequest[], obstacles: Obstac
   const lines = Array.from({ length: 6 }, (): SpotLine => ({ x: 0, y0: 0, dir: 1, extra: 0 }));
   return requests.map((r) => {
     const home = r.prefer === 'beside' ? side(r, 'right', gap) : spot(r, r.prefer, gap);
-    const placement: Placement = r.fixed
+    const placement = r.fixed
       ? { box: { ...home, x: home.x + r.fixed.dx, y: home.y + r.fixed.dy }, displaced: false }
-      : cheapest(r, bounds, gap, step, at, lines)
-        ?? { box: { ...home, y: Math.min(hard.top(), bounds.y) - 2 * gap - r.h }, displaced: true };
+      : cheapest(r, bounds, gap, step, at, lines);
+    if (!placement) return null;
     hard.add(placement.box);
     columns.add(placement.box);
     return placement;

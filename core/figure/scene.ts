@@ -68,6 +68,18 @@ export interface TextItem {
 
 export type SceneItem = PathItem | TextItem;
 
+/**
+ * A label the layout left out of the drawing because no spot clear of the bars and the
+ * other labels was left for it inside the plot (no text and no leader line is drawn).
+ * - `level`: the label of a level; `pathway` and `point` are ids (as on the level's
+ *   items), `pathwayName` and `label` what the user calls them (the label as typed).
+ * - `annotation`: the label of a barrier arrow or span bracket; `annotation` indexes
+ *   `doc.figure.annotations` (from 0), `text` is the label's text (e.g. "ΔG‡ = 14.2").
+ */
+export type OmittedLabel =
+  | { kind: 'level'; pathway: string; point: string; pathwayName: string; label: string }
+  | { kind: 'annotation'; annotation: number; pathway: string; pathwayName: string; text: string };
+
 /** A complete figure. */
 export interface Scene {
   widthMm: number;
@@ -76,6 +88,11 @@ export interface Scene {
   background: string | null;
   fontFamily: string;
   items: SceneItem[];
+  /**
+   * Labels left out for want of room, in placement order (empty, never absent, when all
+   * fit). Labels the user placed by hand are always drawn and never listed here.
+   */
+  omittedLabels: OmittedLabel[];
 }
 
 /** Millimetres per typographic point (1 pt = 1/72 in, 1 in = 25.4 mm exactly). */

@@ -2,6 +2,9 @@ import { extname } from 'node:path';
 import { resolveProfile } from '../profile/resolve.ts';
 import { renderFigure } from '../export/renderFigure.node.ts';
 import { checkRenderOptions, type FigureFormat } from '../export/renderFigure.ts';
+import { readFontMetrics } from '../figure/font/fontMetrics.ts';
+import { layoutFigure } from '../figure/layoutFigure.ts';
+import { omittedLabelsMessage } from '../figure/omittedLabelsMessage.ts';
 import type { Preset } from '../figure/presets.ts';
 import type { ThemeName } from '../figure/themes.ts';
 import { CliError, EXIT_USAGE, type CliIo } from './io.ts';
@@ -30,7 +33,10 @@ function pick<T extends string>(name: string, value: string | undefined, allowed
   return value as T;
 }
 
-/** `passline render FILE -o OUT.svg|pdf|png`: the figure, drawn from the same scene as the app. */
+/**
+ * `passline render FILE -o OUT.svg|pdf|png`: the figure, drawn from the same scene as the
+ * app. Labels left out for want of room are named in a warning on stderr (exit code 0).
+ */
 export async function runRender(file: string, options: RenderCliOptions, io: CliIo): Promise<void> {
   if (!options.output) throw new CliError('render: -o OUT.svg, OUT.pdf or OUT.png is required', EXIT_USAGE);
   const format = FORMATS[extname(options.output).toLowerCase()];
@@ -42,9 +48,12 @@ export async function runRender(file: string, options: RenderCliOptions, io: Cli
   const problem = checkRenderOptions({ dpi, widthMm });
   if (problem) throw new CliError(`--${problem.replace(/^width/, 'width-mm')}`, EXIT_USAGE);
   const doc = applySettingOptions(loadInput(file, io), options);
-  const data = await renderFigure(resolveProfile(doc), doc, {
-    format, fontBytes: readBundledFont(),
-    ...(preset ? { preset } : {}), ...(theme ? { theme } : {}), ...(widthMm !== undefined ? { widthMm } : {}), ...(dpi !== undefined ? { dpi } : {}),
-  });
+  const profile = resolveProfile(doc);
+  const fontBytes = readBundledFont();
+  const layout = { ...(preset ? { preset } : {}), ...(theme ? { theme } : {}), ...(widthMm !== undefined ? { widthMm } : {}) };
+  const data = await renderFigure(profile, doc, { format, fontBytes, ...layout, ...(dpi !== undefined ? { dpi } : {}) });
   await writeOutput(options.output, data, io);
+  // renderFigure keeps its scene to itself; laying out again costs milliseconds.
+  const warning = omittedLabelsMessage(layoutFigure(profile, doc, { metrics: readFontMetrics(fontBytes), ...layout }).omittedLabels);
+  if (warning) io.err(`passline render: warning: ${warning}\n`);
 }

@@ -19,7 +19,7 @@ const crowded = fc.record({
 });
 
 describe('label placement on crowded profiles', () => {
-  it('never lets label boxes overlap each other or any bar', () => {
+  it('never lets label boxes overlap each other or any bar, nor leave the page', () => {
     fc.assert(fc.property(crowded, (c) => {
       const specs: PathwaySpec[] = Array.from({ length: c.pathways }, (_, p) => ({
         id: `p${p}`, name: `route ${p}`,
@@ -30,6 +30,8 @@ describe('label placement on crowded profiles', () => {
       const boxes = labelBoxes(scene);
       const bars = barBoxes(scene);
       for (let i = 0; i < boxes.length; i++) {
+        const a = boxes[i]!;
+        if (a.x < 0 || a.y < 0 || a.x + a.w > scene.widthMm || a.y + a.h > scene.heightMm) return false;
         for (const b of bars) if (intersects(boxes[i]!, b)) return false;
         for (let j = i + 1; j < boxes.length; j++) if (intersects(boxes[i]!, boxes[j]!)) return false;
       }

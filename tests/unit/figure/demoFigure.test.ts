@@ -15,10 +15,12 @@ describe('the demo figure', () => {
 
   for (const preset of ['single', 'double', 'slide'] as const) {
     for (const connector of ['dashed', 'curve'] as const) {
-      it(`keeps labels clear of bars and each other (${preset}, ${connector})`, () => {
+      it(`draws every label, clear of bars and each other (${preset}, ${connector})`, () => {
         const doc = { ...loaded.doc, figure: { ...loaded.doc.figure, connector } };
         const scene = layoutFigure(profile, doc, { metrics: fontMetrics(), preset });
         expect(paths(scene, 'level').length).toBeGreaterThan(0);
+        // The demo has room for every label in every preset.
+        expect(scene.omittedLabels).toEqual([]);
         const boxes = labelBoxes(scene);
         const bars = barBoxes(scene);
         boxes.forEach((a, i) => {

@@ -1,10 +1,10 @@
 import { drawScene } from '../../core/figure/drawScene.ts';
-import type { Role, Scene, Stroke, TextItem } from '../../core/figure/scene.ts';
+import type { Role, Scene, SceneItem, Stroke, TextItem } from '../../core/figure/scene.ts';
 import type { DrawingSink } from '../../core/figure/sink.ts';
 
 /** One SVG element for the canvas to render, in drawing order. */
 export type SceneElement =
-  | { type: 'path'; d: string; fill: string; stroke?: Stroke; role: Role | 'background'; pathway?: string; point?: string }
+  | { type: 'path'; d: string; fill: string; stroke?: Stroke; role: Role | 'background'; pathway?: string; point?: string; item?: SceneItem }
   | { type: 'text'; item: TextItem };
 
 const memo = new WeakMap<object, SceneElement>();
@@ -40,7 +40,7 @@ export function sceneElements(scene: Scene): SceneElement[] {
       const path = d;
       out.push(remembered(item, () => ({
         type: 'path', d: path, fill: fill ?? 'none', role: owner?.role ?? 'background',
-        ...(stroke ? { stroke } : {}), ...(owner?.pathway ? { pathway: owner.pathway } : {}), ...(owner?.point ? { point: owner.point } : {}),
+        ...(stroke ? { stroke } : {}), ...(owner ? { item: owner } : {}), ...(owner?.pathway ? { pathway: owner.pathway } : {}), ...(owner?.point ? { point: owner.point } : {}),
       })));
       d = '';
       index++;

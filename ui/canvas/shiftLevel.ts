@@ -47,19 +47,18 @@ function barOf(scene: Scene, pathway: string, point: string) {
 }
 
 /**
- * Splits a scene into what stays put and what moves when one level is dragged: the level,
- * its label and leader, and the connectors that meet it. Drawing the moving part on its
- * own layer keeps a drag from repainting the whole figure.
+ * What moves when one level is dragged: the level, its label and leader, and the
+ * connectors that meet it, as a scene of their own (drawn on a layer above) and as the
+ * set of items the figure underneath hides meanwhile. The figure underneath keeps its
+ * scene unchanged, so starting a drag does not redraw it.
  */
-export function splitScene(scene: Scene, pathway: string, point: string): { still: Scene; moving: Scene } {
+export function splitScene(scene: Scene, pathway: string, point: string): { moving: Scene; hidden: ReadonlySet<SceneItem> } {
   const bar = barOf(scene, pathway, point);
-  if (!bar) return { still: scene, moving: { ...scene, background: null, items: [] } };
+  if (!bar) return { moving: { ...scene, background: null, items: [] }, hidden: new Set() };
   const moves = (item: SceneItem) => item.pathway === pathway && (item.point === point
     || (item.kind === 'path' && item.role === 'connector' && Object.values(touches(item, bar.y, bar.xs)).some(Boolean)));
-  return {
-    still: { ...scene, items: scene.items.filter((i) => !moves(i)) },
-    moving: { ...scene, background: null, items: scene.items.filter(moves) },
-  };
+  const items = scene.items.filter(moves);
+  return { moving: { ...scene, background: null, items }, hidden: new Set(items) };
 }
 
 /**

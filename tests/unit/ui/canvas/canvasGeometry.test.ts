@@ -53,8 +53,11 @@ describe('canvas drawing and geometry', () => {
     expect(changed.some((i) => i.kind === 'path' && i.role === 'level' && i.point === 't')).toBe(true);
     expect(changed.filter((i) => i.kind === 'path' && i.role === 'connector')).toHaveLength(2);
     expect(changed.every((i) => i.point === 't' || (i.kind === 'path' && i.role === 'connector'))).toBe(true);
-    const { still, moving } = splitScene(scene, 'p', 't');
-    expect(still.items.length + moving.items.length).toBe(scene.items.length);
+    const { moving, hidden } = splitScene(scene, 'p', 't');
+    expect(moving.items.length).toBeGreaterThan(2);
+    expect([...hidden]).toEqual(moving.items);
+    expect(moving.items.every((i) => scene.items.includes(i))).toBe(true);
+    expect(moving.items.every((i) => i.point === 't' || (i.kind === 'path' && i.role === 'connector'))).toBe(true);
   });
 
   it('arrow keys nudge by one shown decimal, Shift by ten; sideways by a tenth of a slot', () => {

@@ -37,3 +37,20 @@ describe('FindingsList', () => {
     expect(onselect).toHaveBeenCalledWith('cat', 'ts1');
   });
 });
+
+describe('FindingsList on a long list', () => {
+  const many = Array.from({ length: 120 }, (_, i) => ({ severity: 'warning' as const, code: 'duplicate-label', message: `finding number ${i + 1}` }));
+
+  it('shows the first 50 with the full count, and all of them on request', async () => {
+    render(FindingsList, { pathways, findings: many });
+    expect(screen.getByRole('heading', { name: 'Findings (120)' })).toBeTruthy();
+    expect(screen.getAllByRole('listitem')).toHaveLength(50);
+    const more = screen.getByRole('button', { name: 'Show all 120 findings' });
+    expect(more.getAttribute('aria-expanded')).toBe('false');
+    await fireEvent.click(more);
+    expect(screen.getAllByRole('listitem')).toHaveLength(120);
+    expect(screen.getAllByRole('listitem').at(-1)?.textContent).toContain('finding number 120');
+    await fireEvent.click(screen.getByRole('button', { name: 'Show the first 50 only' }));
+    expect(screen.getAllByRole('listitem')).toHaveLength(50);
+  });
+});

@@ -1,5 +1,6 @@
 import type { BoxIndex } from './boxIndex.ts';
-import { blockedRuns, RUN_EPS, runAt, type BlockedRuns, type ColumnIndex } from './columnIndex.ts';
+import { RUN_EPS, runAt, type BlockedRuns, type ColumnIndex } from './columnIndex.ts';
+import { runsCache, type RunsCache } from './runsCache.ts';
 import type { Box } from './scene.ts';
 
 /** One line of candidate spots: fixed x, top edge y0 + dir · distance, with an extra cost. */
@@ -16,13 +17,13 @@ export interface SpotSearch {
   hard: BoxIndex;
   columns: ColumnIndex;
   soft: BoxIndex;
-  /** Blocked runs of the lines met in the current search. */
-  runs: BlockedRuns[];
+  /** Blocked runs of whole columns (of `columns`), shared by lines and labels that look down the same one. */
+  runs: RunsCache;
 }
 
 /** A search over the given indexes. */
 export function spotSearch(hard: BoxIndex, columns: ColumnIndex, soft: BoxIndex): SpotSearch {
-  return { hard, columns, soft, runs: [] };
+  return { hard, columns, soft, runs: runsCache(columns) };
 }
 
 /**
@@ -31,8 +32,8 @@ export function spotSearch(hard: BoxIndex, columns: ColumnIndex, soft: BoxIndex)
  * `gap`, it touches no hard box and lies inside `bounds`. Its cost is the distance plus
  * the line's extra, plus h when it crosses a soft box; a tie goes to the nearer spot, then
  * to the earlier line. Blocked stretches of a line are skipped whole, using the blocked
- * runs of its column ahead of it; every spot taken is confirmed by an exact test. Undefined when no
- * spot is clear.
+ * runs of its column (from `at.runs`, shared with other lines and labels down the same
+ * column); every spot taken is confirmed by an exact test. Undefined when no spot is clear.
  */
 export function cheapestSpot(lines: readonly SpotLine[], w: number, h: number, bounds: Box, gap: number, step: number, limit: number, at: SpotSearch): { box: Box; distance: number } | undefined {
   const top = bounds.y;
@@ -41,7 +42,6 @@ export function cheapestSpot(lines: readonly SpotLine[], w: number, h: number, b
   let bestI = -1;
   let bestY = 0;
   let bestX = 0;
-  let used = 0;
   for (const line of lines) {
     const { x, y0, dir, extra } = line;
     if (x < bounds.x || x + w > bounds.x + bounds.w) continue;
@@ -61,12 +61,8 @@ export function cheapestSpot(lines: readonly SpotLine[], w: number, h: number, b
       let k = runs ? runAt(runs, y) : -1;
       if (k < 0 && at.hard.hitsAt(x, y, w, h, gap)) {
         if (!runs) {
-          // Only the stretch of the line still ahead, as far as a spot could still win.
-          const reach = y0 + dir * (bestCost - extra);
-          if (used === at.runs.length) at.runs.push(blockedRuns());
-          runs = at.runs[used++]!;
-          if (dir > 0) at.columns.blocked(x, w, h, gap, y, Math.min(bottom - h, reach), runs);
-          else at.columns.blocked(x, w, h, gap, Math.max(top, reach), y, runs);
+          // The whole column, so the line looking the other way and the next labels of this slot can reuse it.
+          runs = at.runs.get(x, w, h, gap, top, bottom - h);
           k = runAt(runs, y);
         }
         if (k < 0) {

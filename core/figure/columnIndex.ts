@@ -28,13 +28,18 @@ export interface ColumnIndex {
    * exact test, as are all tops outside [from, to].
    */
   blocked(x: number, w: number, h: number, margin: number, from: number, to: number, out: BlockedRuns): void;
+  /** A number that changes whenever a box is added to a strip that `blocked(x, w, …, margin, …)` reads. */
+  version(x: number, w: number, margin: number): number;
 }
 
 /** A column index with strips `stripMm` wide; a box is filed in every strip it covers. */
 export function columnIndex(stripMm: number): ColumnIndex {
   const strips = new Map<number, Box[]>();
+  // When each strip last had a box added (a count of adds).
+  const stamps = new Map<number, number>();
   const strip = (v: number) => Math.floor(v / stripMm);
   let tallest = 0;
+  let adds = 0;
   // Scratch for the merge, reused between calls.
   const lists: Box[][] = [];
   let at = new Int32Array(8);
@@ -44,7 +49,9 @@ export function columnIndex(stripMm: number): ColumnIndex {
       // A private copy: every box in the strips then has one shape, which keeps the merge fast.
       const box: Box = { x: original.x, y: original.y, w: original.w, h: original.h };
       tallest = Math.max(tallest, box.h);
+      adds++;
       for (let i = strip(box.x); i <= strip(box.x + box.w); i++) {
+        stamps.set(i, adds);
         const list = strips.get(i);
         if (!list) strips.set(i, [box]);
         else list.splice(firstBelow(list, box.y, true), 0, box);
@@ -69,6 +76,11 @@ export function columnIndex(stripMm: number): ColumnIndex {
       }
       out.n = 0;
       mergeRuns(lists, at, end, k, x, w, h, margin, out);
+    },
+    version(x, w, margin) {
+      let latest = 0;
+      for (let i = strip(x - margin); i <= strip(x + w + margin); i++) latest = Math.max(latest, stamps.get(i) ?? 0);
+      return latest;
     },
   };
 }

@@ -72,7 +72,8 @@ export type SceneItem = PathItem | TextItem;
  * A label the layout left out of the drawing because no spot clear of the bars and the
  * other labels was left for it inside the plot (no text and no leader line is drawn).
  * - `level`: the label of a level; `pathway` and `point` are ids (as on the level's
- *   items), `pathwayName` and `label` what the user calls them (the label as typed).
+ *   items), `pathwayName` and `label` what the user calls them (the label as typed). A
+ *   state shared by several pathways, labelled once, is listed once, under the first.
  * - `annotation`: the label of a barrier arrow or span bracket; `annotation` indexes
  *   `doc.figure.annotations` (from 0), `text` is the label's text (e.g. "ΔG‡ = 14.2").
  */

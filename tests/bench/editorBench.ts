@@ -77,7 +77,7 @@ async function main(): Promise<void> {
     await page.mouse.move(x, y);
     await page.mouse.down();
     if (process.env.TRACE) await browser.startTracing(page, { path: '/tmp/editor-trace.json', categories: ['devtools.timeline', 'disabled-by-default-devtools.timeline'] });
-    for (let i = 1; i <= 120; i++) {
+    for (let i = 1; i <= 300; i++) {
       await page.mouse.move(x, y - 8 - ((i * 3) % 90));
       await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => setTimeout(r, 0))));
     }

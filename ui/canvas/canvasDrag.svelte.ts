@@ -79,6 +79,7 @@ export class CanvasDrag {
     }
     const g = this.#gesture;
     if (!g) return;
+    const t0 = performance.now();
     markFrame(event.timeStamp);
     const dx = event.clientX - g.x0, dy = event.clientY - g.y0;
     if (g.axis === null) {
@@ -91,7 +92,6 @@ export class CanvasDrag {
     const dyMm = dy / g.pxPerMm;
     const next = dragEdit(g.start, g.target, g.axis, dx / g.pxPerMm, dyMm, this.#view().geometry);
     if (!level || this.#commitCost <= LIVE_BUDGET_MS) return this.#commit(g, next, dyMm);
-    const t0 = performance.now();
     g.pending = next;
     if (!this.ahead) this.ahead = { pathway: g.target.pathway, point: g.target.point };
     this.shift = { pathway: g.target.pathway, point: g.target.point, dyMm: dyMm - g.committedDy };

@@ -2,7 +2,8 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { fireEvent, render, screen } from '@testing-library/svelte';
 import FigureCanvas from '../../../../ui/canvas/FigureCanvas.svelte';
 import { routeStore } from '../editor/storeFixture.ts';
-import { sceneOf } from './sceneFixture.ts';
+import { metrics, sceneOf } from './sceneFixture.ts';
+import { layoutFigure } from '../../../../core/figure/layoutFigure.ts';
 
 // jsdom has no ResizeObserver (Svelte's bind:clientWidth uses it); the canvas then keeps its default width.
 beforeAll(() => {
@@ -34,5 +35,24 @@ describe('FigureCanvas', () => {
     await fireEvent.keyDown(ts, { key: 'ArrowDown' });
     expect(store.doc).toBe(before);
     expect(screen.getByText(/Dragging is off: TS is a barrier estimate \(marcus\)/)).toBeTruthy();
+  });
+});
+
+describe('FigureCanvas on a figure too small for its labels', () => {
+  it('says which labels are left out and draws the selected one by hand on request', async () => {
+    const store = routeStore();
+    const tiny = () => layoutFigure(store.profile, store.doc, { metrics, widthMm: 16, heightMm: 9 });
+    const left = tiny().omittedLabels;
+    expect(left.length).toBeGreaterThan(0);
+    const first = left[0]!;
+    if (first.kind !== 'level') throw new Error('expected a level label to be left out');
+    store.selection = { pathway: first.pathway, point: first.point };
+    render(FigureCanvas, { store, scene: tiny() });
+    expect(screen.getByRole('status').textContent).toMatch(/found no clear spot inside the figure/);
+    await fireEvent.click(screen.getByRole('button', { name: `Draw the label “${first.label}” at its level` }));
+    const point = store.doc.pathways[0]!.points.find((p) => p.id === first.point)!;
+    expect(point.labelOffsetMm).toEqual({ dx: 0, dy: 0 });
+    // A hand-placed label is always drawn.
+    expect(tiny().omittedLabels.some((o) => o.kind === 'level' && o.point === first.point)).toBe(false);
   });
 });

@@ -30,22 +30,25 @@ export type AnnotationPlan =
  * that is not a readable catalytic cycle is left out with a finding naming it. The span is
  * the energetic span model's (Kozuch & Shaik, Acc. Chem. Res. 44, 101 (2011)): TDI, TDTS, δE.
  */
-export function planAnnotations(profile: ResolvedProfile, doc: Document, pathways: readonly LayoutPathway[]): { plans: AnnotationPlan[]; findings: Finding[] } {
+export function planAnnotations(profile: ResolvedProfile, doc: Document, pathways: readonly LayoutPathway[]): { plans: AnnotationPlan[]; findings: Finding[]; reasons: Map<number, string> } {
   const plans: AnnotationPlan[] = [];
   const findings: Finding[] = [];
+  const reasons = new Map<number, string>();
   const unit = profile.unit;
   doc.figure.annotations.forEach((a, n) => {
     const where = `figure annotation ${n + 1} (${a.type})`;
-    const fail = (code: string, message: string, pathway?: string, point?: string) =>
+    const fail = (code: string, message: string, pathway?: string, point?: string) => {
+      reasons.set(n, message);
       findings.push({ severity: 'warning', code, message: `${where}: ${message}; it is not drawn`, ...(pathway ? { pathway } : {}), ...(point ? { point } : {}) });
+    };
     if (a.type === 'text') {
       plans.push({ kind: 'text', annotation: n, text: a.text, slot: a.x, energy: a.y });
       return;
     }
     const drawn = pathways.find((p) => p.id === a.pathway);
     if (!drawn) {
-      const exists = doc.pathways.some((p) => p.id === a.pathway);
-      fail(exists ? 'annotation-pathway-hidden' : 'annotation-unknown-pathway', exists ? `pathway "${a.pathway}" is hidden` : `there is no pathway "${a.pathway}"`, exists ? a.pathway : undefined);
+      const hidden = doc.pathways.find((p) => p.id === a.pathway);
+      fail(hidden ? 'annotation-pathway-hidden' : 'annotation-unknown-pathway', hidden ? `pathway "${hidden.name || hidden.id}" is hidden` : `there is no pathway "${a.pathway}"`, hidden ? a.pathway : undefined);
       return;
     }
     const known = (id: string): KnownPoint | string => {
@@ -73,7 +76,7 @@ export function planAnnotations(profile: ResolvedProfile, doc: Document, pathway
     const deltaE = fromJoulesPerMol(span.deltaEJ, unit);
     plans.push({ kind: 'span', annotation: n, pathwayId: a.pathway, tdi, tdts, tdtsLabel: span.tdts.label, low: tdi.energy, high: tdi.energy + deltaE, deltaE, wrap: !span.tdtsAfterTdi });
   });
-  return { plans, findings };
+  return { plans, findings, reasons };
 }
 
 function higherOf(pathway: LayoutPathway, barrierlessId: string): string {
@@ -88,6 +91,11 @@ function higherOf(pathway: LayoutPathway, barrierlessId: string): string {
 /** Energies an annotation needs on the page (the scale is widened to show them). */
 export function planEnergies(plans: readonly AnnotationPlan[]): number[] {
   return plans.flatMap((p) => (p.kind === 'span' ? [p.low, p.high] : p.kind === 'text' ? [p.energy] : []));
+}
+
+/** Why each annotation that cannot be drawn is left out, by its index in `doc.figure.annotations` (for the annotation list). */
+export function annotationProblems(profile: ResolvedProfile, doc: Document): ReadonlyMap<number, string> {
+  return planAnnotations(profile, doc, collectPoints(profile, doc)).reasons;
 }
 
 /** Why annotations of the document cannot be drawn (empty when all can): for the findings list. */

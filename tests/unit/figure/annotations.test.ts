@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { layoutFigure } from '../../../core/figure/layoutFigure.ts';
-import { annotationFindings } from '../../../core/figure/annotationPlans.ts';
+import { annotationFindings, annotationProblems } from '../../../core/figure/annotationPlans.ts';
 import type { Figure } from '../../../core/model/schema.ts';
 import type { PathItem, Scene } from '../../../core/figure/scene.ts';
 import { fontMetrics } from './fontFixture.ts';
@@ -64,6 +64,15 @@ describe('energetic span annotation', () => {
     const { doc, profile } = twoPathways({ annotations: [{ type: 'span', pathway: 'cat' }, { type: 'span', pathway: 'nope' }] });
     expect(paths(layoutFigure(profile, doc, { metrics }), 'annotation')).toHaveLength(0);
     expect(annotationFindings(profile, doc).map((f) => f.code)).toEqual(['annotation-not-cycle', 'annotation-unknown-pathway']);
+    expect([...annotationProblems(profile, doc)]).toEqual([[0, 'pathway "with catalyst" is not marked as a catalytic cycle'], [1, 'there is no pathway "nope"']]);
+  });
+
+  it('is left out, by its index and the pathway\'s name, when its cycle is hidden', () => {
+    const { doc, profile } = cycle(CYCLE_A, [{ type: 'text', text: 'note', x: 1, y: 0 }, { type: 'span', pathway: 'c' }]);
+    doc.pathways[0]!.style = { ...doc.pathways[0]!.style, visible: false };
+    expect(annotationText(layoutFigure(profile, doc, { metrics }))).toEqual(['note']);
+    expect([...annotationProblems(profile, doc)]).toEqual([[1, 'pathway "cycle" is hidden']]);
+    expect(annotationFindings(profile, doc)[0]).toMatchObject({ code: 'annotation-pathway-hidden', pathway: 'c', message: 'figure annotation 2 (span): pathway "cycle" is hidden; it is not drawn' });
   });
 });
 

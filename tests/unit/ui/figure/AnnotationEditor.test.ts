@@ -49,3 +49,16 @@ describe('AnnotationEditor (Figure tab)', () => {
     expect(store.doc.figure.annotations).toEqual([{ type: 'text', text: 'slow step', x: 1.5, y: 18 }]);
   });
 });
+
+describe('AnnotationEditor with a hidden pathway', () => {
+  it('says an annotation on a hidden pathway is not drawn and shows the pathway on request', async () => {
+    const store = routeStore();
+    store.apply({ ...store.doc, figure: { ...store.doc.figure, annotations: [{ type: 'barrier', pathway: 'p', from: 'a', to: 't' }] } });
+    store.apply({ ...store.doc, pathways: [{ ...store.doc.pathways[0]!, style: { ...store.doc.pathways[0]!.style, visible: false } }] });
+    render(FigureOptions, { store });
+    expect(within(list()).getByText('— not drawn: pathway "Route" is hidden.')).toBeTruthy();
+    await fireEvent.click(within(list()).getByRole('button', { name: 'Show Route' }));
+    expect(store.doc.pathways[0]!.style.visible).toBe(true);
+    expect(within(list()).queryByText(/not drawn/)).toBeNull();
+  });
+});

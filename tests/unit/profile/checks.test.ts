@@ -56,7 +56,7 @@ describe('consistency findings', () => {
       { id: 'a', name: 'Ligand A', points: [typed('S', 'min', 0), typed('TS-a', 'ts', 18), typed('P', 'min', -7)] },
       { id: 'b', name: 'Ligand B', points: [typed('S', 'min', 0), typed('TS-b', 'ts', 15), typed('P', 'min', p)] },
     ] });
-    expect(findings(doc(-6), 'shared-state-mismatch')[0]?.message).toBe('"P" is -7.0 kcal mol⁻¹ in "Ligand A" but -6.0 kcal mol⁻¹ in "Ligand B"');
+    expect(findings(doc(-6), 'shared-state-mismatch')[0]?.message).toBe('"P" has 2 different energies across pathways: -7.0 kcal mol⁻¹ in "Ligand A", -6.0 kcal mol⁻¹ in "Ligand B"');
     expect(findings(doc(-7), 'shared-state-mismatch')).toEqual([]);
   });
 

@@ -1,5 +1,6 @@
 import type { Finding, ResolvedPathway, ResolvedPoint } from '../profile/types.ts';
 import { stepShapes } from './stepShapes.ts';
+import { stepTopEnergy } from './stepTopEnergy.ts';
 
 /** One state of a catalytic cycle as the energetic span model sees it. */
 export interface CycleState {
@@ -58,9 +59,10 @@ function state(p: ResolvedPoint, origin: CycleState['origin']): CycleState {
 function stepTop(pathway: ResolvedPathway, a: ResolvedPoint, ts: ResolvedPoint | null, b: ResolvedPoint, findings: Finding[]): CycleState {
   const ea = a.energyJ as number;
   const eb = b.energyJ as number;
-  if (ts === null) return { id: `${a.id}→${b.id}`, label: `${a.label} → ${b.label} (no TS)`, energyJ: Math.max(ea, eb), origin: 'barrierless' };
+  if (ts === null) return { id: `${a.id}→${b.id}`, label: `${a.label} → ${b.label} (no TS)`, energyJ: stepTopEnergy(ea, null, eb), origin: 'barrierless' };
   const et = ts.energyJ as number;
-  if (et >= ea && et >= eb) return state(ts, 'given');
+  const top = stepTopEnergy(ea, et, eb);
+  if (top === et) return state(ts, 'given');
   findings.push({ severity: 'warning', code: 'ts-below-neighbour', message: `cycle "${pathway.name}": TS "${ts.label}" lies below "${(et < ea ? a : b).label}"; it is raised to the higher neighbour (barrierless step)`, pathway: pathway.id, point: ts.id });
-  return { ...state(ts, 'raised'), energyJ: Math.max(ea, eb) };
+  return { ...state(ts, 'raised'), energyJ: top };
 }

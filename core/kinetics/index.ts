@@ -6,6 +6,7 @@ export * from './types.ts';
 export * from './conditions.ts';
 export * from './eyring.ts';
 export * from './steps.ts';
+export * from './stepTopEnergy.ts';
 export * from './stepKinetics.ts';
 export * from './effectiveBarrier.ts';
 export * from './feasibilityReading.ts';

@@ -2,6 +2,7 @@ import type { Finding, ResolvedPathway, ResolvedPoint } from '../profile/types.t
 import { checkConditions, readMolecularity } from './conditions.ts';
 import { halfLifeFirstOrder, logEquilibriumConstant, logEyringRate, rateUnit, type RateUnit } from './eyring.ts';
 import { splitSteps, type StepShape } from './steps.ts';
+import { stepTopEnergy } from './stepTopEnergy.ts';
 import type { KineticsOptions, Molecularity, PointRef } from './types.ts';
 
 /** Energetics and Eyring rates of one step; energy-derived values are null when an energy is unknown. */
@@ -61,12 +62,12 @@ function stepKinetics(pathway: ResolvedPathway, shape: StepShape, options: Kinet
   if (m.findings.length > 0) findings.push(...m.findings);
   const a = shape.from.energyJ;
   const b = shape.to.energyJ;
-  const t = shape.ts === null ? (a === null || b === null ? null : Math.max(a, b)) : shape.ts.energyJ;
+  const t = shape.ts === null ? (a === null || b === null ? null : stepTopEnergy(a, null, b)) : shape.ts.energyJ;
   const known = a !== null && b !== null && t !== null;
   if (!known) {
     findings.push({ severity: 'warning', code: 'step-energy-missing', message: `step ${stepName(shape)} of "${pathway.name}" has an unknown energy; its rates are not computed`, pathway: pathway.id, point: key.id });
   }
-  const negativeBarrier = known && shape.ts !== null && (t < a || t < b);
+  const negativeBarrier = known && shape.ts !== null && stepTopEnergy(a, t, b) > t;
   if (negativeBarrier) {
     const below = t < a ? shape.from : shape.to;
     findings.push({ severity: 'warning', code: 'ts-below-neighbour', message: `in "${pathway.name}", TS "${shape.ts?.label}" lies ${kj((below.energyJ ?? 0) - t)} below "${below.label}"; the step is treated as barrierless (TS raised to the higher minimum) instead of giving k > κk_BT/h`, pathway: pathway.id, point: key.id });
@@ -84,7 +85,7 @@ function stepKinetics(pathway: ResolvedPathway, shape: StepShape, options: Kinet
 
 /** Rates over the TS raised to the higher neighbour if it lies below one. */
 function rates(a: number, t: number, b: number, options: KineticsOptions) {
-  const top = Math.max(t, a, b);
+  const top = stepTopEnergy(a, t, b);
   const kappa = options.transmission ?? 1;
   const logKForward = logEyringRate(top - a, options.temperatureK, kappa);
   const logKReverse = logEyringRate(top - b, options.temperatureK, kappa);

@@ -1,5 +1,6 @@
 import type { Finding, ResolvedPathway } from '../../profile/types.ts';
 import { fromJoulesPerMol } from '../../units/index.ts';
+import { stepTopEnergy } from '../stepTopEnergy.ts';
 import type { MassActionNetwork, MassActionReaction } from './network.ts';
 import { pathwaySteps } from './pathwaySteps.ts';
 import { stepRateConstants } from './stepRateConstants.ts';
@@ -24,7 +25,7 @@ export type PathwayNetworkResult =
  * For a cycle the last point is the regenerated first state (lower by ΔG_r): its step leads
  * back to the first species, and its net extent is counted as turnovers — the sequence
  * convention of Kozuch & Shaik, Acc. Chem. Res. 44, 101 (2011) (REFERENCE.md §6).
- * A TS below one of its minima is clamped to the higher minimum, with a warning.
+ * A TS below one of its minima is clamped to the higher minimum (`stepTopEnergy`), with a warning.
  */
 export function networkFromPathway(pathway: ResolvedPathway, options: PathwayNetworkOptions): PathwayNetworkResult {
   const { steps, errors } = pathwaySteps(pathway);
@@ -40,7 +41,7 @@ export function networkFromPathway(pathway: ResolvedPathway, options: PathwayNet
   const reactions: MassActionReaction[] = steps.map((step, i) => {
     const dG = step.to.energyJ - step.from.energyJ;
     const direct = step.ts ? step.ts.energyJ - step.from.energyJ : 0;
-    const barrier = Math.max(direct, dG, 0);
+    const barrier = stepTopEnergy(step.from.energyJ, step.ts?.energyJ ?? null, step.to.energyJ) - step.from.energyJ;
     if (step.ts && barrier > direct) {
       findings.push({ severity: 'warning', code: 'microkinetics-ts-below-minimum', message: `"${step.ts.label}" lies ${fromJoulesPerMol(barrier - direct, 'kcal/mol').toFixed(2)} kcal/mol below a neighbouring minimum; the simulation uses a barrier of ${fromJoulesPerMol(barrier, 'kcal/mol').toFixed(2)} kcal/mol`, pathway: pathway.id, point: step.ts.id });
     }

@@ -266,6 +266,12 @@ test('the Figure tab adds a barrier arrow, the span bracket of the cycle and fre
   await page.getByRole('combobox', { name: 'Pathway', exact: true }).selectOption({ label: 'LA cycle (cycle)' });
   await page.getByRole('button', { name: 'Add annotation' }).click();
   await expect(list).toContainText('Energetic span of LA cycle');
+  // The demo's cycle is hidden, so its bracket is listed as not drawn until it is shown.
+  await expect(list).toContainText('not drawn: pathway "LA cycle" is hidden');
+  await expect(page.locator('section.canvas svg.scene')).not.toContainText('δE =');
+  await list.getByRole('button', { name: 'Show LA cycle' }).click();
+  await expect(page.locator('section.canvas svg.scene')).toContainText('δE =');
+  await expect(list).not.toContainText('not drawn');
   await page.getByRole('combobox', { name: 'New annotation', exact: true }).selectOption('text');
   await page.getByRole('textbox', { name: 'Text', exact: true }).fill('Lewis acid lowers TS1');
   await page.getByRole('textbox', { name: 'Text x (slots)' }).fill('2');

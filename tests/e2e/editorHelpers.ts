@@ -28,6 +28,7 @@ export function pointRow(page: Page, pathway: string, index: number) {
 
 /** Drags the pointer from the centre of a locator by (dx, dy) px in small moves. */
 export async function dragBy(page: Page, target: ReturnType<Page['locator']>, dx: number, dy: number): Promise<void> {
+  await target.scrollIntoViewIfNeeded();
   const box = await target.boundingBox();
   if (!box) throw new Error('nothing to drag');
   const x = box.x + box.width / 2, y = box.y + box.height / 2;

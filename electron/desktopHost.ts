@@ -3,6 +3,7 @@ import { stat } from 'node:fs/promises';
 import { basename, resolve } from 'node:path';
 import { DOCUMENT_EXTENSION, EXPORT_TYPES, type AutosaveSnapshot, type CloseReply, type HostWire, type OpenedFile, type SaveRequest } from '../ui/host/hostApi.ts';
 import { atomicWrite } from '../core/io/atomicWrite.node.ts';
+import { sweepStaleTemps } from '../core/io/sweepStaleTemps.node.ts';
 import { diskState, fingerprintOf, type FileFingerprint } from './fileFingerprint.ts';
 import { documentFilter, exportFilter, withExtension } from './fileFilters.ts';
 import type { Logger } from './hardenContents.ts';
@@ -109,6 +110,7 @@ export function createDesktopHost(deps: DesktopHostDeps) {
       if (!picked) return null;
       const path = withExtension(picked, EXPORT_TYPES[request.mimeType]);
       await atomicWrite(path, request.data).catch((error: unknown) => { throw fileError('write', path, error); });
+      await sweepStaleTemps(path).catch(() => []);
       return { name: basename(path), path };
     },
     async recentFiles() {

@@ -1,5 +1,6 @@
 import { readFile } from 'node:fs/promises';
 import { atomicWrite } from '../core/io/atomicWrite.node.ts';
+import { sweepStaleTemps } from '../core/io/sweepStaleTemps.node.ts';
 
 /**
  * Where the previous version of a document is kept: next to it, with `.bak` added
@@ -27,10 +28,12 @@ async function atomicCopy(source: string, destination: string): Promise<boolean>
  * Saves a document atomically and keeps what it replaces as the backup. The old file is
  * copied to the backup first (itself atomically) and only then replaced, so at every
  * moment the document is the old or the new version and the backup, when present, is one
- * whole earlier version. Resolves to whether a previous version was kept.
+ * whole earlier version. Then temporary files that interrupted earlier saves of either left
+ * behind are swept, best effort. Resolves to whether a previous version was kept.
  */
 export async function saveWithBackup(target: string, data: string | Uint8Array): Promise<boolean> {
   const kept = await atomicCopy(target, backupPathOf(target));
   await atomicWrite(target, data);
+  await Promise.all([target, backupPathOf(target)].map((path) => sweepStaleTemps(path).catch(() => [])));
   return kept;
 }

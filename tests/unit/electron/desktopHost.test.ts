@@ -90,6 +90,15 @@ describe('desktop host: open and save', () => {
     expect(d.pickSavePath.mock.calls[0]?.[1]).toEqual({ name: 'PNG image', extensions: ['png'] });
   });
 
+  it('sweeps an old temporary file an interrupted export of the same file left', async () => {
+    const stale = doc('.figure.svg.0123456789ab.tmp', '<sv');
+    utimesSync(stale, new Date(Date.now() - 3_600_000), new Date(Date.now() - 3_600_000));
+    const { host } = makeHost(dialogs([], [join(folder, 'figure.svg')]));
+    await host.exportFile({ suggestedName: 'figure.svg', data: '<svg/>', mimeType: 'image/svg+xml' });
+    expect(existsSync(stale)).toBe(false);
+    expect(readFileSync(join(folder, 'figure.svg'), 'utf8')).toBe('<svg/>');
+  });
+
   it('names the file and the reason when reading fails', async () => {
     const { host } = makeHost(dialogs([join(folder, 'gone.passline')]));
     await expect(host.openDocument()).rejects.toThrow('could not read gone.passline (ENOENT)');

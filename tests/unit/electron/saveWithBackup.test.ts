@@ -1,5 +1,5 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { existsSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdtempSync, readdirSync, readFileSync, rmSync, utimesSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { backupPathOf, saveWithBackup } from '../../../electron/saveWithBackup.ts';
@@ -24,6 +24,17 @@ describe('saveWithBackup', () => {
     expect(readFileSync(backupPathOf(target), 'utf8')).toBe('v2');
     expect(readdirSync(folder).sort()).toEqual(['route.passline', 'route.passline.bak']);
   });
+
+  it('sweeps old temporary files that interrupted saves of the document and its backup left', async () => {
+    const target = join(folder, 'route.passline');
+    const hourAgo = new Date(Date.now() - 3_600_000);
+    for (const name of ['.route.passline.0123456789ab.tmp', '.route.passline.bak.0123456789ab.tmp', '.other.passline.0123456789ab.tmp']) {
+      writeFileSync(join(folder, name), 'torn');
+      utimesSync(join(folder, name), hourAgo, hourAgo);
+    }
+    await saveWithBackup(target, 'v1');
+    expect(readdirSync(folder).sort()).toEqual(['.other.passline.0123456789ab.tmp', 'route.passline']);
+  });
 });
 
 // Killed at any moment, the document is one whole version and so is its backup.
@@ -44,5 +55,10 @@ describe('saveWithBackup under kill -9', () => {
       }
     }
     expect(backupsSeen).toBeGreaterThan(0);
+    // Whatever temporary files the kills left, once old they go with the next save.
+    const later = new Date(Date.now() - 3_600_000);
+    for (const name of readdirSync(folder).filter((n) => n.endsWith('.tmp'))) utimesSync(join(folder, name), later, later);
+    await saveWithBackup(target, 'C');
+    expect(readdirSync(folder).sort()).toEqual(['doc.passline', 'doc.passline.bak']);
   }, 90_000);
 });

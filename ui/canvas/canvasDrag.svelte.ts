@@ -53,6 +53,8 @@ export class CanvasDrag {
     const el = (event.target as Element).closest('[data-point]');
     const pathway = el?.getAttribute('data-pathway'), point = el?.getAttribute('data-point');
     if (event.button !== 0 || !overlay) return;
+    // A connector is picked by its click; capturing the pointer here would take the click away.
+    if (!el && (event.target as Element).closest('[data-kind="step"]')) return;
     if (!el || !pathway || !point) {
       if (viewport) this.#pan = { x: event.clientX, y: event.clientY, left: viewport.scrollLeft, top: viewport.scrollTop, viewport };
       overlay.setPointerCapture(event.pointerId);

@@ -1,0 +1,29 @@
+import type { DocumentAnalysis } from '../../core/analysis/analyseDocument.ts';
+import type { Unit } from '../../core/model/schema.ts';
+import { unitLabel } from '../../core/units/energy.ts';
+import { formatEnergy } from '../format/formatEnergy.ts';
+import { formatScientific } from '../format/formatNumber.ts';
+
+const signed = (j: number | null, unit: Unit, decimals: number) => {
+  if (j === null) return '—';
+  const t = formatEnergy(j, unit, decimals);
+  return t.startsWith('-') ? `−${t.slice(1)}` : `+${t}`;
+};
+
+/**
+ * What picking a connector tells: the kinetic step it belongs to (minimum → TS → minimum,
+ * or two minima in a row) with its barriers, reaction energy and forward rate constant,
+ * all with units. Null when the connector is not part of a step (e.g. an open end).
+ */
+export function stepSummary(analysis: DocumentAnalysis, pathwayId: string, from: string, to: string, unit: Unit, decimals: number): string | null {
+  const pathway = analysis.pathways.find((p) => p.pathway.id === pathwayId);
+  const step = pathway?.steps.find((s) => (s.ts
+    ? (s.from.id === from && s.ts.id === to) || (s.ts.id === from && s.to.id === to)
+    : s.from.id === from && s.to.id === to));
+  if (!pathway || !step) return null;
+  const q = analysis.profile.quantity === 'E' ? 'E' : analysis.profile.quantity;
+  const u = unitLabel(unit);
+  const route = `${step.from.label} → ${step.ts ? `${step.ts.label} → ` : ''}${step.to.label}`;
+  const k = step.kForward === null ? '' : `; k forward ${formatScientific(step.kForward)} ${step.unitForward}`;
+  return `Step ${route} (${pathway.pathway.name}): Δ${q}‡ ${signed(step.barrierForwardJ, unit, decimals)} ${u} forward, ${signed(step.barrierReverseJ, unit, decimals)} ${u} back; Δr${q} ${signed(step.reactionEnergyJ, unit, decimals)} ${u}${k}`;
+}

@@ -18,7 +18,9 @@ export function pathData(segments: readonly Segment[]): string {
   return segments.map((s) => (s.op === 'Z' ? 'Z' : s.op === 'C' ? `C${n(s.x1)} ${n(s.y1)} ${n(s.x2)} ${n(s.y2)} ${n(s.x)} ${n(s.y)}` : `${s.op}${n(s.x)} ${n(s.y)}`)).join('');
 }
 
-function ends(item: PathItem): { start: Segment; end: Segment } | null {
+type Drawn = Exclude<Segment, { op: 'Z' }>;
+
+function ends(item: PathItem): { start: Drawn; end: Drawn } | null {
   const start = item.segments[0], end = item.segments.at(-1);
   return start && end && start.op !== 'Z' && end.op !== 'Z' ? { start, end } : null;
 }

@@ -65,6 +65,22 @@ test('a label dragged by hand stays where it was put; a level dragged sideways m
   await expect(int).toHaveAccessibleName(/ΔG = 2\.3 kcal mol⁻¹/);
 });
 
+test('clicking a connector describes its step; Enter on the focused connector clears it again', async ({ page }) => {
+  // Thermal route of the demo: AE 0, TS-th +31.8, LC −9.6 kcal/mol (typed), so the step has
+  // ΔG‡ +31.8 forward, 31.8 + 9.6 = +41.4 back and ΔrG −9.6.
+  const connector = page.getByRole('button', { name: /^Step AE → TS-th → LC \(Thermal\)/ }).first();
+  await expect(connector).toHaveAccessibleName(/ΔG‡ \+31\.8 kcal mol⁻¹ forward, \+41\.4 kcal mol⁻¹ back; ΔrG −9\.6 kcal mol⁻¹; k forward .+ s⁻¹$/);
+  const box = (await connector.boundingBox())!;
+  // The connector rises from AE to TS-th: a point a fifth of the way along it.
+  await page.mouse.click(box.x + 0.2 * box.width, box.y + 0.8 * box.height);
+  const described = page.locator('section.canvas p.step');
+  await expect(described).toHaveText(/^Step AE → TS-th → LC \(Thermal\): ΔG‡ \+31\.8 kcal mol⁻¹ forward/);
+  await expect(connector).toHaveAttribute('aria-pressed', 'true');
+  await connector.focus();
+  await page.keyboard.press('Enter');
+  await expect(described).toHaveCount(0);
+});
+
 test('keyboard only: Tab reaches a level and the arrow keys nudge it by the shown decimal', async ({ page }) => {
   const ts1 = level(page, 'TS1', CAT);
   await ts1.focus();

@@ -11,3 +11,5 @@ export { addComparison, removeComparison } from './comparisonEdits.ts';
 export { setComposition, compositionProblem } from './compositionEdits.ts';
 export { editRateData, MIN_RATE_ROWS, type RateRow, type RateDataEdit } from './rateDataEdits.ts';
 export { addAnnotation, removeAnnotation, annotationProblem, type Annotation } from './annotationEdits.ts';
+export { addConformer, duplicateConformer, deleteConformer, canDeleteConformer, setConformerCell, pasteConformers, writeConformerRows, type ConformerEdit, type ConformerRef } from './conformerEdits.ts';
+export { CONFORMER_COLUMNS, conformerRow, conformerColumnByName, structureFromRow, type ConformerColumn, type ConformerColumnKey, type ConformerError, type ConformerRow } from './conformerColumns.ts';

@@ -1,11 +1,11 @@
-import type { Quantity, Species, Structure } from '../model/schema.ts';
+import type { Species } from '../model/schema.ts';
 import { ensembleFreeEnergyJ, ensemblePopulations } from '../thermo/ensemble.ts';
 import { neatSolventCorrectionJ, standardStateCorrectionJ } from '../thermo/standardState.ts';
-import { toJoulesPerMol } from '../units/energy.ts';
 import type { ResolveContext } from './context.ts';
+import { structureEnergiesJ } from './structureEnergy.ts';
 
-/** Temperature assumed for thermal corrections when a species does not say (the usual default of quantum-chemistry programs). */
-export const DEFAULT_CORRECTION_T = 298.15;
+export { DEFAULT_CORRECTION_T } from './structureEnergy.ts';
+
 /** Neat water, mol/L: common practice (55.34 M from the density at 25 °C also appears). */
 export const DEFAULT_NEAT_CONCENTRATION = 55.5;
 
@@ -13,17 +13,6 @@ export const DEFAULT_NEAT_CONCENTRATION = 55.5;
 export type SpeciesEnergy =
   | { ok: true; valueJ: number; notes: string[]; rescaled: boolean }
   | { ok: false; missing: string };
-
-function structureEnergyHartree(s: Structure, quantity: Quantity, t: number, t0: number): { value: number; rescaled: boolean } | string {
-  const base = s.singlePoint ?? s.electronic;
-  if (quantity === 'E') return { value: base, rescaled: false };
-  if (quantity === 'H') return s.hCorrection === undefined ? 'no thermal correction to H' : { value: base + s.hCorrection, rescaled: false };
-  if (s.gCorrection === undefined) return 'no thermal correction to G';
-  if (Math.abs(t - t0) < 1e-9 || s.hCorrection === undefined) return { value: base + s.gCorrection, rescaled: false };
-  // S = (H − G)/T0 from the corrections, then G(T) ≈ H − T·S with H held at T0.
-  const entropyTerm = (s.hCorrection - s.gCorrection) / t0;
-  return { value: base + s.hCorrection - t * entropyTerm, rescaled: true };
-}
 
 /** Standard-state shift for one species, J/mol (G only). */
 function standardStateShiftJ(species: Species, ctx: ResolveContext): { shiftJ: number; note?: string } {
@@ -43,15 +32,9 @@ function standardStateShiftJ(species: Species, ctx: ResolveContext): { shiftJ: n
  */
 export function speciesEnergy(species: Species, ctx: ResolveContext): SpeciesEnergy {
   if (species.structures.length === 0) return { ok: false, missing: 'no absolute energies' };
-  const t0 = species.correctionTemperatureK ?? DEFAULT_CORRECTION_T;
-  const values: number[] = [];
-  let rescaled = false;
-  for (const s of species.structures) {
-    const e = structureEnergyHartree(s, ctx.quantity, ctx.temperatureK, t0);
-    if (typeof e === 'string') return { ok: false, missing: e };
-    values.push(toJoulesPerMol(e.value, 'hartree'));
-    rescaled ||= e.rescaled;
-  }
+  const energies = structureEnergiesJ(species, ctx.quantity, ctx.temperatureK);
+  if (!energies.ok) return { ok: false, missing: energies.missing };
+  const { valuesJ: values, rescaled } = energies;
   const notes: string[] = [];
   let valueJ = values[0]!;
   if (values.length > 1) {

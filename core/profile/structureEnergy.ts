@@ -1,0 +1,39 @@
+import type { Quantity, Species, Structure } from '../model/schema.ts';
+import { toJoulesPerMol } from '../units/energy.ts';
+
+/** Temperature assumed for thermal corrections when a species does not say (the usual default of quantum-chemistry programs). */
+export const DEFAULT_CORRECTION_T = 298.15;
+
+/**
+ * One conformer's energy in the profile's quantity, hartree: E (or its single point) plus the
+ * thermal correction to H or G, or why it cannot be had. G away from the corrections'
+ * temperature T0 is G(T) ≈ H − T·S with S = (H − G)/T0 (H and S held at T0).
+ */
+export function structureEnergyHartree(s: Structure, quantity: Quantity, t: number, t0: number): { value: number; rescaled: boolean } | string {
+  const base = s.singlePoint ?? s.electronic;
+  if (quantity === 'E') return { value: base, rescaled: false };
+  if (quantity === 'H') return s.hCorrection === undefined ? 'no thermal correction to H' : { value: base + s.hCorrection, rescaled: false };
+  if (s.gCorrection === undefined) return 'no thermal correction to G';
+  if (Math.abs(t - t0) < 1e-9 || s.hCorrection === undefined) return { value: base + s.gCorrection, rescaled: false };
+  const entropyTerm = (s.hCorrection - s.gCorrection) / t0;
+  return { value: base + s.hCorrection - t * entropyTerm, rescaled: true };
+}
+
+/** Every conformer's energy of a species in J/mol, or the first one that cannot be had (0-based index). */
+export type StructureEnergies =
+  | { ok: true; valuesJ: number[]; rescaled: boolean }
+  | { ok: false; index: number; missing: string };
+
+/** The conformers' energies of a species in `quantity` at `temperatureK`, J/mol. */
+export function structureEnergiesJ(species: Species, quantity: Quantity, temperatureK: number): StructureEnergies {
+  const t0 = species.correctionTemperatureK ?? DEFAULT_CORRECTION_T;
+  const valuesJ: number[] = [];
+  let rescaled = false;
+  for (const [index, s] of species.structures.entries()) {
+    const e = structureEnergyHartree(s, quantity, temperatureK, t0);
+    if (typeof e === 'string') return { ok: false, index, missing: e };
+    valuesJ.push(toJoulesPerMol(e.value, 'hartree'));
+    rescaled ||= e.rescaled;
+  }
+  return { ok: true, valuesJ, rescaled };
+}

@@ -11,24 +11,10 @@
 import { chromium } from '@playwright/test';
 import { spawn } from 'node:child_process';
 import { existsSync } from 'node:fs';
-import { serializeDocument, makeDocument } from '../../core/model/load.ts';
+import { crowdedDocumentText } from '../fixtures/crowdedDocument.ts';
 
 const PORT = 4176;
 const URL_ = `http://127.0.0.1:${PORT}/`;
-
-// Invented profiles: a deterministic zig-zag per pathway, offset a little per pathway.
-function bigDocument(): string {
-  return serializeDocument(makeDocument({
-    title: 'Bench (invented): 10 pathways × 50 points',
-    pathways: Array.from({ length: 10 }, (_, p) => ({
-      id: `p${p}`, name: `pathway ${p + 1}`,
-      points: Array.from({ length: 50 }, (_, i) => ({
-        id: `p${p}-${i}`, label: i % 2 ? `TS${i}` : `I${i}`, kind: (i % 2 ? 'ts' : 'min') as 'ts' | 'min',
-        energy: { mode: 'value' as const, value: Number(((i % 2 ? 15 : -2) + 6 * Math.sin(i * 0.7 + p) + p * 0.3).toFixed(1)), unit: 'kcal/mol' as const },
-      })),
-    })),
-  }));
-}
 
 const quantile = (xs: number[], q: number) => { const s = [...xs].sort((a, b) => a - b); return s[Math.min(s.length - 1, Math.floor(q * s.length))] ?? NaN; };
 
@@ -56,7 +42,7 @@ async function main(): Promise<void> {
     const demoReady = Date.now() - start;
 
     // Open the big document the way a user drops a file, and time until its 500 levels can be picked.
-    const text = bigDocument();
+    const text = crowdedDocumentText();
     const openMs = await page.evaluate(async (t) => {
       const t0 = performance.now();
       const data = new DataTransfer();

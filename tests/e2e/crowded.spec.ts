@@ -2,19 +2,10 @@
 // no room are named and can be drawn by hand, and a level dragged while the figure is too
 // big to re-lay out on every move still lands on the energy it was dropped at.
 import { expect, test, type Page } from '@playwright/test';
-import { makeDocument, serializeDocument } from '../../core/model/load.ts';
+import { crowdedDocumentText } from '../fixtures/crowdedDocument.ts';
 import { consoleErrors, level, openEditor } from './editorHelpers.ts';
 
-const crowded = serializeDocument(makeDocument({
-  title: 'Crowded (invented)',
-  pathways: Array.from({ length: 10 }, (_, p) => ({
-    id: `p${p}`, name: `route ${p + 1}`,
-    points: Array.from({ length: 50 }, (_, i) => ({
-      id: `p${p}-${i}`, label: i % 2 ? `TS${i}` : `I${i}`, kind: (i % 2 ? 'ts' : 'min') as 'ts' | 'min',
-      energy: { mode: 'value' as const, value: Number(((i % 2 ? 15 : -2) + 6 * Math.sin(i * 0.7 + p) + p * 0.3).toFixed(1)), unit: 'kcal/mol' as const },
-    })),
-  })),
-}));
+const crowded = crowdedDocumentText((p) => `route ${p + 1}`);
 
 async function dropDocument(page: Page, text: string): Promise<void> {
   await page.evaluate((t) => {

@@ -2,9 +2,18 @@ import type { Document } from '../model/schema.ts';
 import { analyseDocument } from './analyseDocument.ts';
 import { spaced } from '../kinetics/temperatureScan.ts';
 
+/** What a series holds: forward rate constants, equilibrium constants, cycle TOF or product shares. */
+export type ScanKind = 'k' | 'K' | 'TOF' | 'share';
+
 /** One series over temperature; null where the value cannot be had at that temperature. */
 export interface ScanSeries {
+  /** Unique name, e.g. "k Thermal: AE → LC" (the CLI's column header). */
   name: string;
+  kind: ScanKind;
+  /** The pathway it belongs to (id); absent for product shares, which span pathways. */
+  pathway?: string;
+  /** The step, pathway or product it is about, for a plot legend ("AE → LC"). */
+  label: string;
   unit: string;
   values: (number | null)[];
 }
@@ -34,23 +43,24 @@ function approximationOf(doc: Document, pathwayIndex: number): string {
 export function scanDocument(doc: Document, startK: number, endK: number, count: number): DocumentScan {
   const temperaturesK = spaced({ startK, endK, count });
   const byName = new Map<string, ScanSeries>();
-  const put = (name: string, unit: string, k: number, value: number | null) => {
-    const series = byName.get(name) ?? { name, unit, values: new Array<number | null>(count).fill(null) };
+  const put = (about: Omit<ScanSeries, 'values'>, k: number, value: number | null) => {
+    const series = byName.get(about.name) ?? { ...about, values: new Array<number | null>(count).fill(null) };
     series.values[k] = value;
-    byName.set(name, series);
+    byName.set(about.name, series);
   };
   temperaturesK.forEach((t, k) => {
     const analysis = analyseDocument({ ...doc, settings: { ...doc.settings, temperatureK: t } });
     for (const p of analysis.pathways) {
+      const pathway = p.pathway.id;
       for (const s of p.steps) {
-        const step = `${p.pathway.name}: ${s.from.label} → ${s.to.label}`;
-        put(`k ${step}`, s.unitForward, k, s.kForward);
-        put(`K ${step}`, '1', k, s.equilibriumConstant);
+        const label = `${s.from.label} → ${s.to.label}`;
+        put({ name: `k ${p.pathway.name}: ${label}`, kind: 'k', pathway, label, unit: s.unitForward }, k, s.kForward);
+        put({ name: `K ${p.pathway.name}: ${label}`, kind: 'K', pathway, label, unit: '1' }, k, s.equilibriumConstant);
       }
-      if (p.energeticSpan) put(`TOF ${p.pathway.name}`, 's⁻¹', k, p.energeticSpan.tof);
+      if (p.energeticSpan) put({ name: `TOF ${p.pathway.name}`, kind: 'TOF', pathway, label: p.pathway.name, unit: 's⁻¹' }, k, p.energeticSpan.tof);
     }
     for (const c of analysis.comparisons) {
-      if (c.type === 'selectivity') for (const ch of c.result?.channels ?? []) put(`share ${ch.label}`, '%', k, ch.percent);
+      if (c.type === 'selectivity') for (const ch of c.result?.channels ?? []) put({ name: `share ${ch.label}`, kind: 'share', label: ch.label, unit: '%' }, k, ch.percent);
     }
   });
   return { temperaturesK, series: [...byName.values()], approximations: doc.pathways.map((_, i) => approximationOf(doc, i)) };

@@ -2,6 +2,9 @@ import { describe, expect, it, vi } from 'vitest';
 import { fireEvent, render, screen } from '@testing-library/svelte';
 import KineticsView from '../../../../ui/kinetics/KineticsView.svelte';
 import { routeStore } from '../editor/storeFixture.ts';
+import { makeDocument } from '../../../../core/model/load.ts';
+import { DocumentStore } from '../../../../ui/state/documentStore.svelte.ts';
+import { createFakeHost } from '../host/fakeHost.ts';
 
 describe('KineticsView', () => {
   it('simulates the chosen pathway from the given start and reports the conversion', async () => {
@@ -20,9 +23,27 @@ describe('KineticsView', () => {
     expect(onsimulated).toHaveBeenCalledWith('p', null);
   });
 
-  it('scans the rate constant over a temperature range on a log axis', () => {
+  it('scans the rate constant over a temperature range on a log axis', async () => {
     render(KineticsView, { store: routeStore(), onsimulated: () => {} });
-    expect(screen.getByRole('img', { name: 'Forward rate constants against temperature' })).toBeTruthy();
+    expect(await screen.findByRole('img', { name: 'Forward rate constants against temperature' })).toBeTruthy();
     expect(screen.getByText(/G values held at their input temperature/)).toBeTruthy();
+  });
+
+  it('plots K or the product shares of a selectivity comparison on request', async () => {
+    // Two invented competing routes from A (TS 15 and 16 kcal/mol); the share values are
+    // checked in tests/unit/analysis/scanDocument.test.ts, here only what is offered and drawn.
+    const route = (id: string, ts: number) => ({ id, name: id, points: [
+      { id: `${id}-a`, label: 'A', kind: 'min' as const, energy: { mode: 'value' as const, value: 0, unit: 'kcal/mol' as const } },
+      { id: `${id}-t`, label: `TS-${id}`, kind: 'ts' as const, energy: { mode: 'value' as const, value: ts, unit: 'kcal/mol' as const } },
+      { id: `${id}-p`, label: `P-${id}`, kind: 'min' as const, energy: { mode: 'value' as const, value: -3, unit: 'kcal/mol' as const } },
+    ] });
+    const doc = makeDocument({ pathways: [route('x', 15), route('y', 16)], comparisons: [{ type: 'selectivity', pathways: ['x', 'y'], enantiomeric: false }] });
+    render(KineticsView, { store: new DocumentStore(createFakeHost().host, doc, 'routes.passline'), onsimulated: () => {} });
+    const plot = await screen.findByRole('combobox', { name: 'Plot' });
+    expect([...(plot as HTMLSelectElement).options].map((o) => o.textContent)).toEqual(['forward rate constants', 'equilibrium constants', 'product shares']);
+    await fireEvent.change(plot, { target: { value: 'share' } });
+    expect(screen.getByRole('img', { name: 'Product shares against temperature' })).toBeTruthy();
+    await fireEvent.change(plot, { target: { value: 'K' } });
+    expect(screen.getByRole('img', { name: 'Equilibrium constants against temperature' })).toBeTruthy();
   });
 });

@@ -299,3 +299,18 @@ test('the Figure tab adds a barrier arrow, the span bracket of the cycle and fre
   await expect(list.getByRole('listitem')).toHaveCount(2);
   await expect(page.locator('section.canvas svg.scene')).not.toContainText('Lewis acid lowers TS1');
 });
+
+test('the kinetics view simulates the demo cycle, puts its TOF beside the span TOF, and scans TOF or K against T', async ({ page }) => {
+  await page.getByRole('tab', { name: 'Kinetics' }).click();
+  await expect(page.getByRole('combobox', { name: 'Pathway', exact: true })).toHaveValue(/./);
+  await page.getByRole('button', { name: 'Run simulation' }).click();
+  await expect(page.getByRole('img', { name: 'Concentrations against time' })).toBeVisible();
+  const simulated = (await page.getByText(/Simulated TOF .+ s⁻¹/).textContent())!.match(/Simulated TOF (\S+(?: × 10\S+)?) s⁻¹/)![1];
+  await expect(page.getByRole('img', { name: 'TOF of the cycle against temperature' })).toBeVisible();
+  await page.getByRole('combobox', { name: 'Plot' }).selectOption({ label: 'equilibrium constants' });
+  await expect(page.getByRole('img', { name: 'Equilibrium constants against temperature' })).toBeVisible();
+  // Once the simulation has run, the analysis shows its TOF next to the energetic span TOF.
+  await page.getByRole('tab', { name: 'Analysis' }).click();
+  await expect(page.getByText('TOF (simulated)').locator('..')).toContainText(`${simulated} s⁻¹`);
+  await expect(page.getByText('TOF (energetic span)')).toBeVisible();
+});

@@ -7,6 +7,7 @@ import { feasibilityReading, type FeasibilityReading } from '../kinetics/feasibi
 import { energeticSpan, type EnergeticSpan } from '../kinetics/energeticSpan.ts';
 import { compareBarriers, competingPathways, type BarrierComparison, type CompetingPathways } from '../kinetics/compare.ts';
 import { molecularityFromCompositions } from './molecularity.ts';
+import { formatScientific } from '../format/formatScientific.ts';
 
 /** Kinetic reading of one pathway. */
 export interface PathwayAnalysis {
@@ -61,7 +62,7 @@ function fasterThanDiffusion({ pathway, steps }: PathwayAnalysis): Finding[] {
   for (const s of steps) {
     for (const [k, m, dir] of [[s.kForward, s.molecularityForward, 'forward'], [s.kReverse, s.molecularityReverse, 'reverse']] as const) {
       if (k !== null && m >= 2 && k > DIFFUSION_LIMIT) {
-        out.push({ severity: 'info', code: 'faster-than-diffusion', pathway: pathway.id, point: (s.ts ?? s.to).id, message: `the ${dir} rate constant of ${s.from.label} → ${s.to.label} is ${k.toPrecision(3)} M⁻¹ s⁻¹, above the diffusion limit (~10¹⁰ M⁻¹ s⁻¹, common practice); the step is diffusion-controlled in practice` });
+        out.push({ severity: 'info', code: 'faster-than-diffusion', pathway: pathway.id, point: (s.ts ?? s.to).id, message: `the ${dir} rate constant of ${s.from.label} → ${s.to.label} is ${formatScientific(k)} M⁻¹ s⁻¹, above the diffusion limit (~10¹⁰ M⁻¹ s⁻¹, common practice); the step is diffusion-controlled in practice` });
       }
     }
   }

@@ -1,18 +1,7 @@
-const SUPERSCRIPT: Record<string, string> = { '-': '⁻', '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹' };
+import { formatScientific } from '../../core/format/formatScientific.ts';
 
-/**
- * A positive or negative quantity to three significant figures: plain between 0.01 and
- * 10 000, else as "3.21 × 10⁻⁵"; "—" for null or non-finite values.
- */
-export function formatScientific(value: number | null, digits = 3): string {
-  if (value === null || !Number.isFinite(value)) return '—';
-  if (value === 0) return '0';
-  const abs = Math.abs(value);
-  if (abs >= 0.01 && abs < 1e4) return String(Number(value.toPrecision(digits)));
-  const [mantissa, exponent] = value.toExponential(digits - 1).split('e');
-  const exp = String(Number(exponent)).replace(/./g, (c) => SUPERSCRIPT[c] ?? c);
-  return `${mantissa!.replace('-', '−')} × 10${exp}`;
-}
+// One formatter for numbers in the app and in core's messages.
+export { formatScientific };
 
 const SPANS: [number, string][] = [[365.25 * 86400, 'yr'], [86400, 'd'], [3600, 'h'], [60, 'min'], [1, 's']];
 

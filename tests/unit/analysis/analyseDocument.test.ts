@@ -91,6 +91,8 @@ describe('analyseDocument', () => {
     if (!parsed.ok) throw new Error('species demo must load');
     const analysis = analyseDocument(parsed.doc);
     expect(analysis.findings.map((f) => f.code)).toEqual(['faster-than-diffusion', 'faster-than-diffusion']);
+    // Printed the way the app prints numbers: "1.51 × 10¹² M⁻¹ s⁻¹", not "1.51e+12".
+    expect(analysis.findings[0]!.message).toMatch(/ is \d\.\d\d × 10[¹²³⁴⁵⁶⁷⁸⁹⁰]+ M⁻¹ s⁻¹, above the diffusion limit/);
     const [bind] = analysis.pathways[0]!.steps;
     expect(bind).toMatchObject({ barrierless: true, molecularityForward: 2, unitForward: 'M⁻¹ s⁻¹' });
   });

@@ -84,15 +84,19 @@ export function pasteSpecies(doc: Document, args: { text: string; row: number; c
   const header = rows[0]!.cells.map(columnByName);
   const hasHeader = header.every((c): c is SpeciesColumn => c !== undefined);
   const start = SPECIES_COLUMNS.findIndex((c) => c.key === args.column);
-  const columns = hasHeader ? header : rows[0]!.cells.map((_, i) => SPECIES_COLUMNS[start + i]);
+  // Without a header every row fills from `column` rightwards, however wide the first row is.
+  const columnAt = (k: number) => (hasHeader ? header[k] : SPECIES_COLUMNS[start + k]);
   const body = hasHeader ? rows.slice(1) : rows;
   const errors: SheetError[] = [];
   const cells = body.map((r, i) => {
     const out: Partial<SpeciesRow> = {};
     r.cells.forEach((cell, k) => {
-      const column = columns[k];
+      const column = columnAt(k);
       if (column) out[column.key] = cell;
-      else if (cell !== '') errors.push({ row: args.row + i, column: SPECIES_COLUMNS.at(-1)!.key, value: cell, message: `column ${k + 1} of the pasted block lies past the last sheet column` });
+      else if (cell !== '') {
+        const why = hasHeader ? `column ${k + 1} of the pasted block has no header` : `column ${k + 1} of the pasted block lies past the last sheet column`;
+        errors.push({ row: args.row + i, column: SPECIES_COLUMNS.at(-1)!.key, value: cell, message: why });
+      }
     });
     return out;
   });

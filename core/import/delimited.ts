@@ -20,8 +20,9 @@ function detectDelimiter(headerLine: string): DelimitedRows['delimiter'] {
  */
 export function readDelimited(text: string): DelimitedRows {
   const clean = text.replace(/^\uFEFF/, '').replace(/\r\n?/g, '\n');
-  const firstLine = clean.split('\n').find((l) => l.trim() !== '') ?? '';
-  const delimiter = detectDelimiter(firstLine);
+  // The first line that holds any delimiter decides (a one-column first row says nothing).
+  const lines = clean.split('\n').filter((l) => l.trim() !== '');
+  const delimiter = detectDelimiter(lines.find((l) => /[\t;,]/.test(l)) ?? '');
   const parsed = dsvFormat(delimiter).parseRows(clean);
   // d3-dsv does not report line numbers; count newlines inside quoted cells to keep them.
   const rows: DelimitedRows['rows'] = [];

@@ -40,6 +40,16 @@ describe('species sheet edits', () => {
     expect(bad.errors.map((e) => [e.row, e.column, e.value])).toEqual([[0, 'singlePoint', 'x'], [1, 'electronic', 'abc']]);
   });
 
+  it('a headerless row wider than the first still fills rightwards; a headed block names a cell without a header', () => {
+    const doc = twoRoutes();
+    const ragged = pasteSpecies(doc, { text: '-10\n-20\t0.2\t0.03', row: 0, column: 'electronic' });
+    expect(ragged.errors).toEqual([]);
+    expect(ragged.doc.species[1]!.structures[0]).toEqual({ electronic: -20, singlePoint: 0.2, hCorrection: 0.03 });
+    const headed = pasteSpecies(doc, { text: 'label\tE\nA\t-1\t0.5', row: 0, column: 'id' });
+    expect(headed.doc).toBe(doc);
+    expect(headed.errors.map((e) => e.message)).toEqual(['column 3 of the pasted block has no header']);
+  });
+
   it('a species in use cannot be deleted; an unused one can', () => {
     const doc = twoRoutes();
     expect(deleteSpecies(doc, { species: 'a' })).toBe(doc);

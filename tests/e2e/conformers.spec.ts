@@ -3,17 +3,13 @@
 // worked by hand below from the demo's absolute energies (an invented scenario).
 import { expect, test } from '@playwright/test';
 import { readFileSync } from 'node:fs';
-import { consoleErrors, openEditor, pointRow } from './editorHelpers.ts';
+import { consoleErrors, dropFile, openEditor, pointRow } from './editorHelpers.ts';
 
 const demoText = readFileSync(new URL('../../assets/demo/species-demo.passline', import.meta.url), 'utf8');
 
 test.beforeEach(async ({ page }) => {
   await openEditor(page);
-  await page.evaluate((t) => {
-    const data = new DataTransfer();
-    data.items.add(new File([t], 'species-demo.passline', { type: 'application/json' }));
-    window.dispatchEvent(new DragEvent('drop', { dataTransfer: data, bubbles: true, cancelable: true }));
-  }, demoText);
+  await dropFile(page, demoText, 'species-demo.passline');
   await expect(page.getByRole('tab', { name: 'Species (6)' })).toBeVisible();
 });
 test.afterEach(({ page }) => { expect(consoleErrors.get(page)).toEqual([]); });

@@ -3,16 +3,12 @@
 // big to re-lay out on every move still lands on the energy it was dropped at.
 import { expect, test, type Page } from '@playwright/test';
 import { crowdedDocumentText } from '../fixtures/crowdedDocument.ts';
-import { consoleErrors, level, openEditor } from './editorHelpers.ts';
+import { consoleErrors, dropFile, level, openEditor } from './editorHelpers.ts';
 
 const crowded = crowdedDocumentText((p) => `route ${p + 1}`);
 
 async function dropDocument(page: Page, text: string): Promise<void> {
-  await page.evaluate((t) => {
-    const data = new DataTransfer();
-    data.items.add(new File([t], 'crowded.passline', { type: 'application/json' }));
-    window.dispatchEvent(new DragEvent('drop', { dataTransfer: data, bubbles: true, cancelable: true }));
-  }, text);
+  await dropFile(page, text, 'crowded.passline');
   await expect(page.locator('svg.overlay rect.hit')).toHaveCount(500);
 }
 

@@ -4,7 +4,7 @@
 import { expect, test } from '@playwright/test';
 import { readFileSync } from 'node:fs';
 import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
-import { centreY, consoleErrors, dragBy, level, openEditor, pasteSpecies, pointRow } from './editorHelpers.ts';
+import { centreY, consoleErrors, dragBy, dropFile, level, openEditor, pasteSpecies, pointRow } from './editorHelpers.ts';
 
 const demoText = readFileSync(new URL('../../assets/demo/demo.passline', import.meta.url), 'utf8');
 const CAT = 'Catalysed (LA)';
@@ -204,11 +204,7 @@ test('export writes a PNG at the chosen resolution', async ({ page }) => {
 
 test('a dropped file of a newer format is refused with a message and the document stays', async ({ page }) => {
   const newer = { ...JSON.parse(demoText), version: 99, title: 'From the future' };
-  await page.evaluate((text) => {
-    const data = new DataTransfer();
-    data.items.add(new File([text], 'future.passline', { type: 'application/json' }));
-    window.dispatchEvent(new DragEvent('drop', { dataTransfer: data, bubbles: true, cancelable: true }));
-  }, JSON.stringify(newer));
+  await dropFile(page, JSON.stringify(newer), 'future.passline');
   const alert = page.getByRole('alert');
   await expect(alert).toContainText('future.passline could not be opened');
   await expect(alert).toContainText('format version 99');

@@ -45,6 +45,15 @@ export async function centreY(target: ReturnType<Page['locator']>): Promise<numb
   return box.y + box.height / 2;
 }
 
+/** Drops a file with the given text on the window, as a user drags one from the desktop. */
+export async function dropFile(page: Page, text: string, name: string): Promise<void> {
+  await page.evaluate(([t, n]) => {
+    const data = new DataTransfer();
+    data.items.add(new File([t!], n!, { type: 'application/json' }));
+    window.dispatchEvent(new DragEvent('drop', { dataTransfer: data, bubbles: true, cancelable: true }));
+  }, [text, name]);
+}
+
 /** Pastes a tab-separated block into the species sheet's paste field (the Species tab must be open). */
 export async function pasteSpecies(page: Page, text: string): Promise<void> {
   await page.getByRole('textbox', { name: 'Paste a block as new species' }).evaluate((el, t) => {

@@ -37,7 +37,7 @@ const appWindowIds = new Set<number>();
 const commands = new CommandSender();
 const grants = new PathGrants();
 const dialogs = nativeDialogs(() => mainWindow);
-const recent = new RecentStore(app.getPath('userData'));
+const recent = new RecentStore(app.getPath('userData'), { add: (path) => app.addRecentDocument(path), clear: () => app.clearRecentDocuments() });
 const recovery = new RecoveryStore(join(app.getPath('userData'), 'recovery'));
 let closeGuard: CloseGuard | null = null;
 

@@ -58,6 +58,8 @@ vi.mock('electron', () => ({
     setPath: vi.fn(),
     getVersion: () => '0.1.0',
     requestSingleInstanceLock: () => true,
+    addRecentDocument: vi.fn(),
+    clearRecentDocuments: vi.fn(),
     enableSandbox: vi.fn(),
     quit: vi.fn(),
     isReady: () => ready,

@@ -31,6 +31,19 @@ describe('recent list', () => {
 });
 
 describe('RecentStore', () => {
+  it('tells the system list of every document added and of clearing, and keeps its own list of removals', async () => {
+    const added: string[] = [];
+    let cleared = 0;
+    const store = new RecentStore(folder, { add: (path) => added.push(path), clear: () => { cleared++; } });
+    await store.add(p('a.passline'));
+    await store.add(p('b.passline'));
+    await store.remove(p('a.passline'));
+    expect(added).toEqual([p('a.passline'), p('b.passline')]);
+    expect(store.list()).toEqual([{ name: 'b.passline', path: p('b.passline') }]);
+    await store.clear();
+    expect(cleared).toBe(1);
+  });
+
   it('stores the list in the data folder and reads it back in a new session', async () => {
     const store = new RecentStore(folder);
     expect(await store.load()).toEqual([]);

@@ -69,7 +69,8 @@ async function main(): Promise<void> {
     }
     if (process.env.TRACE) await browser.stopTracing();
     await page.mouse.up();
-    await page.waitForTimeout(200);
+    // Let the release commit and its re-render settle before the floor is measured.
+    await page.waitForTimeout(1000);
     const frames = await page.evaluate(() => performance.getEntriesByName('passline:drag-frame').map((e) => e.duration));
     const latency = await page.evaluate(() => performance.getEntriesByName('passline:drag-input-latency').map((e) => e.duration));
     const work = await page.evaluate(() => performance.getEntriesByName('passline:drag-work').map((e) => e.duration));

@@ -1,10 +1,17 @@
 import { describe, expect, it, vi } from 'vitest';
+import * as scanModule from '../../../../core/analysis/scanDocument.ts';
 import { fireEvent, render, screen } from '@testing-library/svelte';
 import KineticsView from '../../../../ui/kinetics/KineticsView.svelte';
 import { routeStore } from '../editor/storeFixture.ts';
 import { makeDocument } from '../../../../core/model/load.ts';
 import { DocumentStore } from '../../../../ui/state/documentStore.svelte.ts';
 import { createFakeHost } from '../host/fakeHost.ts';
+
+// The real scan, counted: the view must scan once per change, not keep rescanning itself.
+vi.mock('../../../../core/analysis/scanDocument.ts', async (original) => {
+  const real = await original<typeof import('../../../../core/analysis/scanDocument.ts')>();
+  return { ...real, scanDocument: vi.fn(real.scanDocument) };
+});
 
 describe('KineticsView', () => {
   it('simulates the chosen pathway from the given start and reports the conversion', async () => {
@@ -45,5 +52,18 @@ describe('KineticsView', () => {
     expect(screen.getByRole('img', { name: 'Product shares against temperature' })).toBeTruthy();
     await fireEvent.change(plot, { target: { value: 'K' } });
     expect(screen.getByRole('img', { name: 'Equilibrium constants against temperature' })).toBeTruthy();
+  });
+
+  it('scans once after a change and not at all while its tab is hidden', async () => {
+    const scans = vi.mocked(scanModule.scanDocument);
+    scans.mockClear();
+    const hidden = render(KineticsView, { store: routeStore(), onsimulated: () => {}, active: false });
+    await new Promise((r) => setTimeout(r, 400));
+    expect(scans).not.toHaveBeenCalled();
+    hidden.unmount();
+    render(KineticsView, { store: routeStore(), onsimulated: () => {} });
+    await screen.findByRole('img', { name: 'Forward rate constants against temperature' });
+    await new Promise((r) => setTimeout(r, 600));
+    expect(scans).toHaveBeenCalledTimes(1);
   });
 });

@@ -1,6 +1,6 @@
 import type { Document, Species, Structure } from '../model/schema.ts';
-import { readDelimited } from '../import/delimited.ts';
-import { CONFORMER_COLUMNS, conformerColumnByName, conformerRow, structureFromRow, type ConformerColumn, type ConformerColumnKey, type ConformerError, type ConformerRow } from './conformerColumns.ts';
+import { pastedBlock } from './pastedBlock.ts';
+import { CONFORMER_COLUMNS, conformerColumnByName, conformerRow, structureFromRow, type ConformerColumnKey, type ConformerError, type ConformerRow } from './conformerColumns.ts';
 
 /** The outcome of a conformer edit: the new document (the same one when refused or unchanged) and any bad cells. */
 export interface ConformerEdit {
@@ -111,23 +111,12 @@ export function setConformerCell(doc: Document, args: ConformerRef & { column: C
  * decides where each column goes; otherwise columns fill from `column` rightwards.
  */
 export function pasteConformers(doc: Document, args: ConformerRef & { text: string; column: ConformerColumnKey }): ConformerEdit {
-  const { rows } = readDelimited(args.text);
-  if (rows.length === 0) return { doc, errors: [] };
-  const header = rows[0]!.cells.map(conformerColumnByName);
-  const hasHeader = header.every((c): c is ConformerColumn => c !== undefined);
-  const start = CONFORMER_COLUMNS.findIndex((c) => c.key === args.column);
-  const columnAt = (k: number) => (hasHeader ? header[k] : CONFORMER_COLUMNS[start + k]);
-  const body = hasHeader ? rows.slice(1) : rows;
-  const errors: ConformerError[] = [];
-  const cells = body.map((r, i) => {
-    const out: Partial<ConformerRow> = {};
-    r.cells.forEach((cell, k) => {
-      const column = columnAt(k);
-      if (column) out[column.key] = cell;
-      else if (cell !== '') errors.push({ row: args.row + i, column: CONFORMER_COLUMNS.at(-1)!.key, value: cell, message: `column ${k + 1} of the pasted block lies past the last conformer column, got "${cell}"` });
-    });
-    return out;
-  });
-  if (errors.length > 0) return { doc, errors };
-  return writeConformerRows(doc, { species: args.species, row: args.row, rows: cells });
+  const { rows, stray } = pastedBlock(args.text, CONFORMER_COLUMNS, conformerColumnByName, args.column);
+  if (stray.length > 0) {
+    return { doc, errors: stray.map((c) => ({
+      row: args.row + c.row, column: CONFORMER_COLUMNS.at(-1)!.key, value: c.value,
+      message: `column ${c.column + 1} of the pasted block lies past the last conformer column, got "${c.value}"`,
+    })) };
+  }
+  return rows.length === 0 ? { doc, errors: [] } : writeConformerRows(doc, { species: args.species, row: args.row, rows });
 }

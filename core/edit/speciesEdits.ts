@@ -1,6 +1,6 @@
 import type { Document, Species, SpeciesTerm } from '../model/schema.ts';
-import { readDelimited } from '../import/delimited.ts';
-import { columnByName, SPECIES_COLUMNS, speciesRow, type SpeciesColumn, type SpeciesColumnKey, type SpeciesRow } from './speciesColumns.ts';
+import { pastedBlock } from './pastedBlock.ts';
+import { columnByName, SPECIES_COLUMNS, speciesRow, type SpeciesColumnKey, type SpeciesRow } from './speciesColumns.ts';
 import { speciesFromRow } from './speciesFromRow.ts';
 import { uniqueId } from './uniqueId.ts';
 
@@ -79,29 +79,14 @@ export function setSpeciesCell(doc: Document, args: { row: number; column: Speci
  * where each column goes; otherwise columns fill the sheet from `column` rightwards.
  */
 export function pasteSpecies(doc: Document, args: { text: string; row: number; column: SpeciesColumnKey }): SheetEdit {
-  const { rows } = readDelimited(args.text);
-  if (rows.length === 0) return { doc, errors: [] };
-  const header = rows[0]!.cells.map(columnByName);
-  const hasHeader = header.every((c): c is SpeciesColumn => c !== undefined);
-  const start = SPECIES_COLUMNS.findIndex((c) => c.key === args.column);
-  // Without a header every row fills from `column` rightwards, however wide the first row is.
-  const columnAt = (k: number) => (hasHeader ? header[k] : SPECIES_COLUMNS[start + k]);
-  const body = hasHeader ? rows.slice(1) : rows;
-  const errors: SheetError[] = [];
-  const cells = body.map((r, i) => {
-    const out: Partial<SpeciesRow> = {};
-    r.cells.forEach((cell, k) => {
-      const column = columnAt(k);
-      if (column) out[column.key] = cell;
-      else if (cell !== '') {
-        const why = hasHeader ? `column ${k + 1} of the pasted block has no header` : `column ${k + 1} of the pasted block lies past the last sheet column`;
-        errors.push({ row: args.row + i, column: SPECIES_COLUMNS.at(-1)!.key, value: cell, message: why });
-      }
-    });
-    return out;
-  });
-  if (errors.length > 0) return { doc, errors };
-  return writeSpeciesRows(doc, args.row, cells);
+  const { rows, stray } = pastedBlock(args.text, SPECIES_COLUMNS, columnByName, args.column);
+  if (stray.length > 0) {
+    return { doc, errors: stray.map((c) => ({
+      row: args.row + c.row, column: SPECIES_COLUMNS.at(-1)!.key, value: c.value,
+      message: c.headed ? `column ${c.column + 1} of the pasted block has no header` : `column ${c.column + 1} of the pasted block lies past the last sheet column`,
+    })) };
+  }
+  return rows.length === 0 ? { doc, errors: [] } : writeSpeciesRows(doc, args.row, rows);
 }
 
 /** Adds an empty species at the end of the sheet. */

@@ -1,5 +1,6 @@
 import type { PathItem, Scene, Segment } from '../../core/figure/scene.ts';
 import type { LevelBox, SceneGeometry } from './sceneGeometry.ts';
+import { mm, pathData } from './pathData.ts';
 
 /** A drawn connector, with the two points it joins, for picking on the canvas. */
 export interface ConnectorHit {
@@ -10,13 +11,7 @@ export interface ConnectorHit {
   d: string;
 }
 
-const n = (v: number) => String(Math.round(v * 1000) / 1000);
-const at = (x: number, y: number) => `${n(x)},${n(y)}`;
-
-/** SVG path data for scene segments (what the canvas strokes as a wide, invisible pick line). */
-export function pathData(segments: readonly Segment[]): string {
-  return segments.map((s) => (s.op === 'Z' ? 'Z' : s.op === 'C' ? `C${n(s.x1)} ${n(s.y1)} ${n(s.x2)} ${n(s.y2)} ${n(s.x)} ${n(s.y)}` : `${s.op}${n(s.x)} ${n(s.y)}`)).join('');
-}
+const at = (x: number, y: number) => `${mm(x)},${mm(y)}`;
 
 type Drawn = Exclude<Segment, { op: 'Z' }>;
 

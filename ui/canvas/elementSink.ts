@@ -1,6 +1,7 @@
 import { drawScene } from '../../core/figure/drawScene.ts';
 import type { Role, Scene, SceneItem, Stroke, TextItem } from '../../core/figure/scene.ts';
 import type { DrawingSink } from '../../core/figure/sink.ts';
+import { mm as n } from './pathData.ts';
 
 /** One SVG element for the canvas to render, in drawing order. */
 export type SceneElement =
@@ -9,7 +10,6 @@ export type SceneElement =
 
 const memo = new WeakMap<object, SceneElement>();
 
-const n = (v: number) => String(Math.round(v * 1000) / 1000);
 
 /**
  * The canvas's drawing sink: the same `drawScene` walk the SVG and PDF writers use,

@@ -21,7 +21,7 @@ export function stepSummary(analysis: DocumentAnalysis, pathwayId: string, from:
     ? (s.from.id === from && s.ts.id === to) || (s.ts.id === from && s.to.id === to)
     : s.from.id === from && s.to.id === to));
   if (!pathway || !step) return null;
-  const q = analysis.profile.quantity === 'E' ? 'E' : analysis.profile.quantity;
+  const q = analysis.profile.quantity;
   const u = unitLabel(unit);
   const route = `${step.from.label} → ${step.ts ? `${step.ts.label} → ` : ''}${step.to.label}`;
   const k = step.kForward === null ? '' : `; k forward ${formatScientific(step.kForward)} ${step.unitForward}`;

@@ -5,6 +5,8 @@ import { existsSync } from 'node:fs';
 // Chromium, which tests/e2e/ensureBrowser.mjs downloads on a machine with internet.
 const debianChromium = '/usr/bin/chromium';
 const executablePath = existsSync(debianChromium) ? debianChromium : undefined;
+// PASSLINE_E2E_PORT lets two checkouts on one machine run their e2e suites side by side.
+const port = Number(process.env.PASSLINE_E2E_PORT ?? 4173);
 
 export default defineConfig({
   testDir: 'tests/e2e',
@@ -14,7 +16,7 @@ export default defineConfig({
   reporter: [['list'], ['json', { outputFile: 'reports/playwright.json' }]],
   use: {
     browserName: 'chromium',
-    baseURL: 'http://127.0.0.1:4173',
+    baseURL: `http://127.0.0.1:${port}`,
     launchOptions: {
       executablePath,
       args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run',
@@ -22,8 +24,8 @@ export default defineConfig({
     },
   },
   webServer: {
-    command: 'npx vite preview --host 127.0.0.1 --port 4173 --strictPort',
-    url: 'http://127.0.0.1:4173',
+    command: `npx vite preview --host 127.0.0.1 --port ${port} --strictPort`,
+    url: `http://127.0.0.1:${port}`,
     reuseExistingServer: false,
     timeout: 30_000,
   },

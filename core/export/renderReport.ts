@@ -46,7 +46,7 @@ export async function renderReport(doc: Document, options: ReportOptions): Promi
   const pages = new ReportPages(metrics);
   reportContent(pages, doc, analysis, report, scene);
   const font = options.subsetFont ? await options.subsetFont(options.fontBytes, usedText(pages.pages, sceneText(scene))) : options.fontBytes;
-  const pdf = new jsPDF({ unit: 'mm', format: 'a4', orientation: 'portrait', compress: true });
+  const pdf = new jsPDF({ unit: 'mm', format: 'a4', orientation: 'portrait', compress: true, putOnlyUsedFonts: true });
   pdf.addFileToVFS('report-font.ttf', toBase64(font));
   pdf.addFont('report-font.ttf', metrics.family, 'normal', 'Identity-H');
   pdf.setFont(metrics.family, 'normal');

@@ -24,7 +24,7 @@ export interface PdfOptions {
  */
 export async function sceneToPdf(scene: Scene, options: PdfOptions): Promise<Uint8Array> {
   const { widthMm: w, heightMm: h } = scene;
-  const pdf = new jsPDF({ unit: 'mm', format: [w, h], orientation: w > h ? 'landscape' : 'portrait', compress: true });
+  const pdf = new jsPDF({ unit: 'mm', format: [w, h], orientation: w > h ? 'landscape' : 'portrait', compress: true, putOnlyUsedFonts: true });
   const font = options.subsetFont ? await options.subsetFont(options.fontBytes, sceneText(scene)) : options.fontBytes;
   const file = 'figure-font.ttf';
   pdf.addFileToVFS(file, toBase64(font));

@@ -5,6 +5,7 @@ import { A4, ReportPages } from '../../../core/export/report/reportPages.ts';
 import { measureText } from '../../../core/figure/font/measureText.ts';
 import { fontBytes, fontMetrics } from '../figure/fontFixture.ts';
 import { analysedDocument } from './analysisFixture.ts';
+import { listPdfFonts, pdffontsEmbedded } from './pdfFonts.ts';
 
 async function pagesOf(bytes: Uint8Array) {
   // pdf.js (Mozilla's reader) parses the bytes independently of jsPDF.
@@ -52,6 +53,16 @@ describe('renderReport', () => {
       expect(p.ops).not.toContain(OPS.paintInlineImageXObject);
     }
     expect(new TextDecoder('latin1').decode(bytes)).not.toMatch(/\/Subtype\s*\/Image/);
+  });
+
+  it('lists only embedded fonts', async () => {
+    const { doc } = analysedDocument();
+    const bytes = await renderReport(doc, { fontBytes });
+    const fonts = listPdfFonts(bytes);
+    expect(fonts.length).toBeGreaterThan(0);
+    expect(fonts.filter((f) => !f.embedded)).toEqual([]);
+    const poppler = pdffontsEmbedded(bytes);
+    if (poppler) expect(poppler.every(Boolean)).toBe(true);
   });
 });
 

@@ -5,6 +5,7 @@ import { sceneToPdf } from '../../../core/export/sceneToPdf.ts';
 import { subsetFontNode } from '../../../core/export/subsetFont.node.ts';
 import { fontBytes, fontMetrics } from '../figure/fontFixture.ts';
 import { fixture } from '../figure/profileFixture.ts';
+import { listPdfFonts, pdffontsEmbedded } from './pdfFonts.ts';
 
 const metrics = fontMetrics();
 const PT_PER_MM = 72 / 25.4;
@@ -65,5 +66,17 @@ describe('sceneToPdf', () => {
     const subset = await sceneToPdf(scene, { fontBytes, subsetFont: subsetFontNode });
     expect(subset.length).toBeLessThan(full.length / 3);
     expect((await open(subset)).text).toContain('ΔG / kcal mol⁻¹');
+  });
+
+  it('lists only the embedded font (no unembedded standard fonts for a preflight to flag)', async () => {
+    const { doc, profile } = scenario();
+    for (const subsetFont of [subsetFontNode, undefined]) {
+      const bytes = await sceneToPdf(layoutFigure(profile, doc, { metrics }), { fontBytes, ...(subsetFont ? { subsetFont } : {}) });
+      const fonts = listPdfFonts(bytes);
+      expect(fonts.map((f) => f.name)).toEqual(['DejaVu#20Sans']);
+      expect(fonts.every((f) => f.embedded)).toBe(true);
+      const poppler = pdffontsEmbedded(bytes);
+      if (poppler) expect(poppler).toEqual([true]);
+    }
   });
 });

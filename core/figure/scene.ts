@@ -64,8 +64,20 @@ export interface TextItem {
   box: Box;
   pathway?: string;
   point?: string;
+  /**
+   * For a label line: the levels its block stands for when more than the item's own
+   * (a state shared by pathways, a stack of close levels), as pathway and point ids.
+   */
+  levels?: { pathway: string; point: string }[];
+  /** For a label line: the id its block's lines share, when not its pathway/point. */
+  block?: string;
 }
 
+/**
+ * Everything a figure is drawn from. New primitives (e.g. structure drawings) join this
+ * union; give them a `box` (their extent on the page) so the geometry audit and the label
+ * placement count them as obstacles without knowing their kind.
+ */
 export type SceneItem = PathItem | TextItem;
 
 /**

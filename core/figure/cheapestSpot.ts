@@ -3,6 +3,12 @@ import { RUN_EPS, runAt, type BlockedRuns, type ColumnIndex } from './columnInde
 import { runsCache, type RunsCache } from './runsCache.ts';
 import type { Box } from './scene.ts';
 
+/**
+ * Extra cost of a clear spot for reasons the indexes cannot see (e.g. the label would sit
+ * nearer another level than its own): 0 when fine, Infinity to refuse it.
+ */
+export type SpotJudge = (x: number, y: number, distance: number) => number;
+
 /** One line of candidate spots: fixed x, top edge y0 + dir · distance, with an extra cost. */
 export interface SpotLine {
   x: number;
@@ -33,9 +39,10 @@ export function spotSearch(hard: BoxIndex, columns: ColumnIndex, soft: BoxIndex)
  * the line's extra, plus h when it crosses a soft box; a tie goes to the nearer spot, then
  * to the earlier line. Blocked stretches of a line are skipped whole, using the blocked
  * runs of its column (from `at.runs`, shared with other lines and labels down the same
- * column); every spot taken is confirmed by an exact test. Undefined when no spot is clear.
+ * column); every spot taken is confirmed by an exact test. `judge`, when given, adds to
+ * the cost of each clear spot that could still win. Undefined when no spot is clear.
  */
-export function cheapestSpot(lines: readonly SpotLine[], w: number, h: number, bounds: Box, gap: number, step: number, limit: number, at: SpotSearch): { box: Box; distance: number } | undefined {
+export function cheapestSpot(lines: readonly SpotLine[], w: number, h: number, bounds: Box, gap: number, step: number, limit: number, at: SpotSearch, judge?: SpotJudge): { box: Box; distance: number } | undefined {
   const top = bounds.y;
   const bottom = bounds.y + bounds.h;
   let bestCost = Infinity;
@@ -76,7 +83,7 @@ export function cheapestSpot(lines: readonly SpotLine[], w: number, h: number, b
         i = Math.max(i + 1, Math.ceil(past / step));
         continue;
       }
-      const cost = base + (at.soft.hitsAt(x, y, w, h, 0) ? h : 0);
+      const cost = base + (at.soft.hitsAt(x, y, w, h, 0) ? h : 0) + (judge ? judge(x, y, d) : 0);
       if (cost < bestCost || (cost === bestCost && i < bestI)) {
         bestCost = cost;
         bestI = i;

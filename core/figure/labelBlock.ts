@@ -33,9 +33,7 @@ const LINE_GAP_EM = 0.05;
 
 /** Builds and measures the label of a level; ‡ is raised after a TS name when asked. */
 export function labelBlock(label: string, kind: 'min' | 'ts', energy: number, style: LabelStyle): LabelBlock {
-  let spans: Span[] = parseMarkup(label);
-  if (style.autoSubscript) spans = autoSubscript(spans);
-  if (kind === 'ts' && style.daggerOnTs && spans.length > 0 && !label.includes('‡')) spans = [...spans, { text: '‡', shift: 'sup' }];
+  const spans = labelSpans(label, kind, style);
   const name = spans.length > 0 ? layoutRichText(spans, style.metrics, style.sizeMm) : null;
   const energyText = formatEnergy(energy, style.decimals, style.energyFormat, style.unit);
   const energyLine = layoutRichText([{ text: energyText, shift: 'base' }], style.metrics, style.sizeMm);
@@ -48,8 +46,16 @@ export function labelBlock(label: string, kind: 'min' | 'ts', energy: number, st
   };
 }
 
+/** The spans of a level's name as printed: markup read, digits lowered when asked, ‡ after a TS name. */
+export function labelSpans(label: string, kind: 'min' | 'ts', style: LabelStyle): Span[] {
+  let spans: Span[] = parseMarkup(label);
+  if (style.autoSubscript) spans = autoSubscript(spans);
+  if (kind === 'ts' && style.daggerOnTs && spans.length > 0 && !label.includes('‡')) spans = [...spans, { text: '‡', shift: 'sup' }];
+  return spans;
+}
+
 /** The text items of a block placed in `box`, each line centred. */
-export function blockItems(block: LabelBlock, box: Box, nameColour: string, energyColour: string, ids: { pathway?: string; point?: string }): TextItem[] {
+export function blockItems(block: LabelBlock, box: Box, nameColour: string, energyColour: string, ids: Pick<TextItem, 'pathway' | 'point' | 'levels'>): TextItem[] {
   const items: TextItem[] = [];
   let top = box.y;
   if (block.name) {

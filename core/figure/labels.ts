@@ -3,87 +3,81 @@ import type { FigureContext } from './figureContext.ts';
 import { blockItems, labelBlock, type LabelBlock, type LabelStyle } from './labelBlock.ts';
 import { barBox, type PlacedLevel } from './levels.ts';
 import type { PathwayPaint } from './pathwayPaint.ts';
-import { placeLabels, type LabelRequest } from './placeLabels.ts';
-import { boxIndex, type BoxIndex } from './boxIndex.ts';
-import { eachPiece } from './pathPieces.ts';
+import { placeLabels, type LabelRequest, type Leader } from './placeLabels.ts';
 import type { AnnotationLabel } from './annotationShapes.ts';
 import type { Box, OmittedLabel, PathItem, SceneItem } from './scene.ts';
+import { stackBlock, type StackEntry } from './stackBlock.ts';
 import { textItem } from './text/textItem.ts';
 
+/** Levels that get one label: a level with its twins (the same state in other pathways), or a stack of close levels at one slot. */
 interface Group {
-  level: PlacedLevel;
-  block: LabelBlock;
-  shared: boolean;
+  entries: StackEntry[];
+  /** Set for a stack: its laid-out block. */
+  stack?: ReturnType<typeof stackBlock>;
 }
 
 /**
- * Labels for all levels: one per level, except that levels at the same spot with the same
- * name and printed energy (a state shared by several pathways) get one label in ink.
- * Placed in slot order, then pathway order, away from every bar and each other, and
- * off the connectors where a spot near the bar allows. Annotation labels (`extra`) are
- * placed after them, by the same rules, beside their arrows. `measured` holds blocks
- * already built for some points (with this same style), so they are not built twice.
- * A label with no clear spot inside `bounds` is left out (see placeLabels) and listed in
- * `omitted`, in placement order. Returns the items and the drawn label boxes (for tests
- * and hit-testing).
+ * Labels for all levels. Levels at the same spot with the same name and printed energy
+ * (a state shared by several pathways) get one label in ink. Levels at one slot too
+ * close for a label between them get one stacked label: a line per level, top to bottom
+ * as the bars lie, each with the pathway's key. Placed in slot order, then pathway order,
+ * clear of every drawn primitive (`hard`: connectors, axis, annotations, anything drawn
+ * before the labels) and each other, next to their own level — nothing nearer, nothing
+ * between — or else joined to it by a leader line. Annotation labels (`extra`) are placed
+ * after them beside their arrows. `measured` holds blocks already built for some points
+ * (with this same style). A label with no clear spot inside `bounds` is left out (see
+ * placeLabels) and listed in `omitted`, in placement order. Returns the items and the drawn
+ * label boxes (for tests and hit-testing).
  */
-export function labels(ctx: FigureContext, placed: readonly PlacedLevel[], paints: ReadonlyMap<number, PathwayPaint>, bounds: Box, soft: readonly Box[], extra: { hard: readonly Box[]; labels: readonly AnnotationLabel[] } = { hard: [], labels: [] }, measured: ReadonlyMap<LayoutPoint, LabelBlock> = new Map()): { items: SceneItem[]; boxes: Box[]; annotationBoxes: Box[]; omitted: OmittedLabel[] } {
+export function labels(ctx: FigureContext, placed: readonly PlacedLevel[], paints: ReadonlyMap<number, PathwayPaint>, bounds: Box, hard: readonly Box[], extra: { labels: readonly AnnotationLabel[] } = { labels: [] }, measured: ReadonlyMap<LayoutPoint, LabelBlock> = new Map()): { items: SceneItem[]; boxes: Box[]; annotationBoxes: Box[]; omitted: OmittedLabel[] } {
   const style: LabelStyle = {
     metrics: ctx.metrics, sizeMm: ctx.sizeMm, decimals: ctx.doc.settings.decimals,
     energyFormat: ctx.doc.figure.energyFormat, unit: ctx.unit, daggerOnTs: ctx.doc.figure.daggerOnTs, autoSubscript: ctx.autoSubscript,
   };
-  const order = [...placed].sort((a, b) => a.x - b.x || a.point.pathwayIndex - b.point.pathwayIndex || a.y - b.y);
-  const groups: Group[] = [];
-  const byKey = new Map<string, Group[]>();
-  for (const level of order) {
-    const block = measured.get(level.point) ?? labelBlock(level.point.label, level.point.kind, level.point.energy!, style);
-    const key = `${level.x.toFixed(4)}|${level.point.label}|${block.energyText}`;
-    const twin = byKey.get(key)?.find((g) => Math.abs(g.level.y - level.y) < 0.5 * ctx.strokeMm);
-    if (twin) twin.shared = true;
-    else {
-      const group = { level, block, shared: false };
-      groups.push(group);
-      const same = byKey.get(key);
-      if (same) same.push(group);
-      else byKey.set(key, [group]);
-    }
-  }
-  const requests: LabelRequest[] = groups.map(({ level, block }) => ({
-    x: level.x, y: level.y, halfWidth: level.halfWidth, w: block.w, h: block.h,
-    prefer: level.point.kind === 'ts' ? 'above' : 'below',
-    ...(level.point.labelOffsetMm ? { fixed: level.point.labelOffsetMm } : {}),
-  }));
-  const all = placeLabels([...requests, ...extra.labels.map((l) => l.request)], { hard: [...placed.map((l) => barBox(l, ctx)), ...extra.hard], soft }, bounds, ctx.gapMm);
+  const bars = new Map(placed.map((l) => [l, barBox(l, ctx, paints.get(l.point.pathwayIndex)?.weight)] as const));
+  const groups = stacks(ctx, twins(ctx, placed, style, measured), style, paints);
+  const requests: LabelRequest[] = groups.map((g) => request(g, bars));
+  const all = placeLabels([...requests, ...extra.labels.map((l) => l.request)], { hard: [...bars.values(), ...hard], soft: [], bars: [...bars.values()] }, bounds, ctx.gapMm);
   const placements = all.slice(0, requests.length);
   const items: SceneItem[] = [];
   const omitted: OmittedLabel[] = [];
   const names = new Map(ctx.doc.pathways.map((p) => [p.id, p.name]));
   const boxes = placements.filter((p) => p !== null).map((p) => p.box);
-  const index = boxIndex(Math.max(2, ...boxes.slice(0, 50).map((b) => b.w)));
-  boxes.forEach(index.add);
   groups.forEach((g, i) => {
     const placement = placements[i];
-    const { pathwayId: pathway, pointId: point, label } = g.level.point;
     if (!placement) {
-      omitted.push({ kind: 'level', pathway, point, pathwayName: names.get(pathway) ?? pathway, label });
+      for (const e of g.entries) {
+        const { pathwayId: pathway, pointId: point, label } = e.levels[0]!.point;
+        omitted.push({ kind: 'level', pathway, point, pathwayName: names.get(pathway) ?? pathway, label });
+      }
       return;
     }
-    const { box, displaced } = placement;
-    const colour = g.shared ? ctx.theme.ink : paints.get(g.level.point.pathwayIndex)!.colour;
-    const line = displaced ? leader(ctx, g.level, box) : null;
-    // A leader that would cut through another label confuses more than it helps.
-    if (line && !crossesOthers(line, index, box)) items.push(line);
-    items.push(...blockItems(g.block, box, ctx.theme.ink, colour, { pathway, point }));
+    const first = g.entries[0]!.levels[0]!.point;
+    const ids = { pathway: first.pathwayId, point: first.pointId };
+    if (placement.leader) items.push(leaderLine(ctx, placement.leader, ids));
+    if (g.stack) {
+      items.push(...g.stack.draw(placement.box));
+      return;
+    }
+    const { levels, block } = g.entries[0]!;
+    const shared = levels.length > 1;
+    const colour = shared ? ctx.theme.ink : paints.get(first.pathwayIndex)!.colour;
+    const owners = shared ? { levels: levels.map((l) => ({ pathway: l.point.pathwayId, point: l.point.pointId })) } : {};
+    items.push(...blockItems(block, placement.box, ctx.theme.ink, colour, { ...ids, ...owners }));
   });
   const annotationBoxes: Box[] = [];
   all.slice(requests.length).forEach((p, k) => {
-    const { request, lines, annotation, pathway } = extra.labels[k]!;
+    const { request: r, lines, annotation, pathway } = extra.labels[k]!;
     if (!p) {
-      const text = lines.map((l) => l.runs.map((r) => r.text).join('')).join(' ');
+      const text = lines.map((l) => l.runs.map((run) => run.text).join('')).join(' ');
       omitted.push({ kind: 'annotation', annotation, pathway, pathwayName: names.get(pathway) ?? pathway, text });
       return;
     }
-    if (p.displaced) items.push(leaderLine(ctx, request.x, request.y, p.box));
+    if (p.displaced) {
+      const x1 = Math.min(Math.max(r.x, p.box.x), p.box.x + p.box.w);
+      const y1 = Math.min(Math.max(r.y, p.box.y), p.box.y + p.box.h);
+      items.push(leaderLine(ctx, { x0: r.x, y0: r.y, x1, y1 }, {}));
+    }
     let top = p.box.y;
     for (const l of lines) {
       items.push(textItem(l, p.box.x, top + l.ascent, ctx.theme.ink, 'annotation'));
@@ -94,24 +88,94 @@ export function labels(ctx: FigureContext, placed: readonly PlacedLevel[], paint
   return { items, boxes, annotationBoxes, omitted };
 }
 
-function crossesOthers(line: PathItem, index: BoxIndex, own: Box): boolean {
-  return eachPiece(line.segments, 0, 16, (x, y, w, h) => index.hitsAt(x, y, w, h, 0, own));
+/**
+ * Levels in slot order, then pathway order, with levels at one spot printing the same
+ * energy joined into one entry: the same state in several pathways, named once, or under
+ * each of its names ("AE / LA + AE") when the pathways call it differently.
+ */
+function twins(ctx: FigureContext, placed: readonly PlacedLevel[], style: LabelStyle, measured: ReadonlyMap<LayoutPoint, LabelBlock>): StackEntry[] {
+  const order = [...placed].sort((a, b) => a.x - b.x || a.point.pathwayIndex - b.point.pathwayIndex || a.y - b.y);
+  const entries: (StackEntry & { names: string[] })[] = [];
+  const byKey = new Map<string, (StackEntry & { names: string[] })[]>();
+  for (const level of order) {
+    const block = measured.get(level.point) ?? labelBlock(level.point.label, level.point.kind, level.point.energy!, style);
+    const key = `${level.x.toFixed(4)}|${block.energyText}`;
+    const twin = byKey.get(key)?.find((e) => Math.abs(e.levels[0]!.y - level.y) < 0.5 * ctx.strokeMm);
+    if (!twin) {
+      const entry = { levels: [level], block, names: [level.point.label] };
+      entries.push(entry);
+      byKey.set(key, [...(byKey.get(key) ?? []), entry]);
+      continue;
+    }
+    twin.levels.push(level);
+    if (twin.names.includes(level.point.label)) continue;
+    twin.names.push(level.point.label);
+    const first = twin.levels[0]!.point;
+    const kind = twin.levels.every((l) => l.point.kind === 'ts') ? 'ts' : 'min';
+    twin.block = labelBlock(twin.names.filter((n) => n.trim() !== '').join(' / '), kind, first.energy!, style);
+  }
+  return entries;
 }
 
-/** A thin line from the bar's centre to the nearest point of a label moved away from it. */
-function leader(ctx: FigureContext, level: PlacedLevel, box: Box): PathItem {
-  const line = leaderLine(ctx, level.x, level.y, box);
-  line.pathway = level.point.pathwayId;
-  line.point = level.point.pointId;
-  return line;
+/**
+ * Joins entries at one slot whose bars lie too close for a label between them (and that
+ * the user has not placed by hand) into stacks; the rest stay single.
+ */
+function stacks(ctx: FigureContext, entries: readonly StackEntry[], style: LabelStyle, paints: ReadonlyMap<number, PathwayPaint>): Group[] {
+  const bySlot = new Map<string, StackEntry[]>();
+  for (const e of entries) {
+    const k = e.levels[0]!.x.toFixed(4);
+    bySlot.set(k, [...(bySlot.get(k) ?? []), e]);
+  }
+  const groups: Group[] = [];
+  for (const slot of bySlot.values()) {
+    const free = slot.filter((e) => !e.levels[0]!.point.labelOffsetMm).sort((a, b) => a.levels[0]!.y - b.levels[0]!.y);
+    for (const e of slot) if (e.levels[0]!.point.labelOffsetMm) groups.push({ entries: [e] });
+    let run: StackEntry[] = [];
+    const flush = () => {
+      if (run.length === 1) groups.push({ entries: run });
+      else if (run.length > 1) {
+        const first = run[0]!.levels[0]!.point;
+        groups.push({ entries: run, stack: stackBlock(ctx, run, style, paints, `stack/${first.pathwayId}/${first.pointId}`) });
+      }
+      run = [];
+    };
+    for (const e of free) {
+      const prev = run[run.length - 1];
+      // Room for a label between two bars: its height and clear space on both sides.
+      if (prev && e.levels[0]!.y - prev.levels[0]!.y >= Math.max(prev.block.h, e.block.h) + 6 * ctx.gapMm) flush();
+      run.push(e);
+    }
+    flush();
+  }
+  return groups;
 }
 
-function leaderLine(ctx: FigureContext, fromX: number, fromY: number, box: Box): PathItem {
-  const x = Math.min(Math.max(fromX, box.x), box.x + box.w);
-  const y = Math.min(Math.max(fromY, box.y), box.y + box.h);
+function request(g: Group, bars: ReadonlyMap<PlacedLevel, Box>): LabelRequest {
+  const levels = g.entries.flatMap((e) => e.levels);
+  const top = levels[0]!;
+  const own = levels.map((l) => bars.get(l)!);
+  if (!g.stack) {
+    const block = g.entries[0]!.block;
+    return {
+      x: top.x, y: top.y, halfWidth: top.halfWidth, w: block.w, h: block.h, own,
+      prefer: top.point.kind === 'ts' ? 'above' : 'below',
+      ...(top.point.labelOffsetMm ? { fixed: top.point.labelOffsetMm } : {}),
+    };
+  }
+  const ys = levels.map((l) => l.y);
+  const ts = levels.filter((l) => l.point.kind === 'ts').length;
   return {
-    kind: 'path', role: 'leader',
+    x: top.x, y: top.y, halfWidth: Math.max(...levels.map((l) => l.halfWidth)), w: g.stack.w, h: g.stack.h, own,
+    nearMm: Math.max(...g.entries.map((e) => e.block.h)),
+    yTop: Math.min(...ys), yBottom: Math.max(...ys), prefer: 2 * ts >= levels.length ? 'above' : 'below',
+  };
+}
+
+function leaderLine(ctx: FigureContext, l: Leader, ids: { pathway?: string; point?: string }): PathItem {
+  return {
+    kind: 'path', role: 'leader', ...ids,
     stroke: { colour: ctx.theme.muted, widthMm: 0.5 * ctx.strokeMm, cap: 'butt' },
-    segments: [{ op: 'M', x: fromX, y: fromY }, { op: 'L', x, y }],
+    segments: [{ op: 'M', x: l.x0, y: l.y0 }, { op: 'L', x: l.x1, y: l.y1 }],
   };
 }

@@ -12,11 +12,14 @@ import { labels } from './labels.ts';
 import { labelBlock } from './labelBlock.ts';
 import { legend } from './legend.ts';
 import { levels, type PlacedLevel } from './levels.ts';
-import { pathPieces } from './pathPieces.ts';
 import { pathwayPaint, type PathwayPaint } from './pathwayPaint.ts';
 import { figureSize, PRESETS, type Preset } from './presets.ts';
 import type { Scene, SceneItem } from './scene.ts';
+import { sceneObstacles } from './sceneObstacles.ts';
 import { THEMES, type ThemeName } from './themes.ts';
+
+/** Text keeps at least this far inside the page (issue 11's rule: 1 mm; a little more for rounding). */
+export const PAGE_MARGIN_MM = 1.2;
 
 /** Options that are not in the document, or override it for one export. */
 export interface LayoutOptions {
@@ -50,22 +53,28 @@ export function layoutFigure(profile: ResolvedProfile, doc: Document, options: L
   const margin = 2 * ctx.gapMm + 0.5 * ctx.sizeMm;
 
   const known = pathways.flatMap((p) => p.points).filter((q): q is LayoutPoint & { energy: number } => q.energy !== null);
-  const probe = energyScale(known.map((q) => q.energy), 1, 0);
-  const left = fig.showAxis ? margin + axisBandWidth(ctx, probe.ticks.map(probe.format)) : margin;
+  const plans = planAnnotations(profile, doc, pathways).plans;
+  const energies = [...known.map((q) => q.energy), ...planEnergies(plans)];
+  // Every tick density the final scale may choose, so the band fits its widest number.
+  const tickLabels = [1, 2, 3, 4, 5].flatMap((count) => {
+    const probe = energyScale(energies, 1, 0, count);
+    return probe.ticks.map(probe.format);
+  });
+  const left = fig.showAxis ? margin + axisBandWidth(ctx, tickLabels) : margin;
   const x1 = size.widthMm - margin;
   const top = fig.showLegend ? margin : 0;
   const key = fig.showLegend ? legend(ctx, pathways, paints, left, x1, top) : { items: [], heightMm: 0 };
   const y0 = Math.max(margin, top + key.heightMm);
-  const y1 = size.heightMm - (fig.showCoordinateArrow ? arrowBandHeight(ctx) + margin / 2 : margin);
+  const y1 = size.heightMm - (fig.showCoordinateArrow ? arrowBandHeight(ctx) + margin / 2 + PAGE_MARGIN_MM : margin);
   const plot = { x: left, y: y0, w: x1 - left, h: y1 - y0 };
 
   // Room for a label above the highest and below the lowest level.
   const style = { ...ctx, decimals: doc.settings.decimals, energyFormat: fig.energyFormat, daggerOnTs: fig.daggerOnTs };
   const measured = new Map(known.slice(0, 200).map((q) => [q, labelBlock(q.label, q.kind, q.energy, style)] as const));
   const tallest = Math.max(0, ...[...measured.values()].map((b) => b.h));
-  const pad = tallest + 3 * ctx.gapMm;
-  const plans = planAnnotations(profile, doc, pathways).plans;
-  const scale = energyScale([...known.map((q) => q.energy), ...planEnergies(plans)], y1 - pad, y0 + pad);
+  const stacked = stackDepth(known);
+  const pad = (lines: number) => Math.max(tallest, lines * ctx.lineMm) + 3 * ctx.gapMm;
+  const scale = energyScale(energies, y1 - pad(stacked.bottom), y0 + pad(stacked.top), 5, 1.5 * ctx.lineMm);
 
   const slots = pathways.flatMap((p) => p.points.map((q) => q.slot));
   const lo = Math.min(0, ...slots);
@@ -84,7 +93,6 @@ export function layoutFigure(profile: ResolvedProfile, doc: Document, options: L
     placed.push(...drawn.placed);
   });
   const paintByIndex = new Map<number, PathwayPaint>(pathways.map((p, i) => [p.index, paints[i]!]));
-  const soft = items.flatMap((item) => item.kind === 'path' && item.role === 'connector' ? pathPieces(item.segments, item.stroke!.widthMm / 2) : []);
   const byId = new Map(placed.map((l) => [`${l.point.pathwayId}\u0000${l.point.pointId}`, l]));
   const marks = annotationShapes(ctx, plans, {
     level: (pathway, point) => byId.get(`${pathway}\u0000${point}`),
@@ -92,11 +100,30 @@ export function layoutFigure(profile: ResolvedProfile, doc: Document, options: L
     y: scale.y,
   });
   items.push(...marks.items);
-  // Labels may reach into the right margin, never over the axis.
-  const labelBounds = { ...plot, w: size.widthMm - ctx.gapMm - plot.x };
-  const placedLabels = labels(ctx, placed, paintByIndex, labelBounds, [...soft, ...marks.soft], marks, measured);
+  // Labels may reach into the right margin, never over the axis, and keep the page margin.
+  const labelBounds = { ...plot, x: plot.x + 2 * ctx.gapMm, w: size.widthMm - PAGE_MARGIN_MM - plot.x - 2 * ctx.gapMm };
+  // Everything drawn so far is an obstacle, whatever it is (see sceneObstacles).
+  const placedLabels = labels(ctx, placed, paintByIndex, labelBounds, sceneObstacles(items), marks, measured);
   items.push(...placedLabels.items);
   items.push(...key.items);
   if (fig.showCoordinateArrow) items.push(...coordinateArrow(ctx, plot.x, x1, y1 + margin / 2));
   return { widthMm: size.widthMm, heightMm: size.heightMm, background: theme.background, fontFamily: options.metrics.family, items, omittedLabels: placedLabels.omitted };
+}
+
+/**
+ * How many levels may stack into one label at the top and at the bottom of the plot: the
+ * most levels one slot has within a tenth of the energy range of the highest (lowest)
+ * level (our rule of thumb), so the scale leaves room for a stacked label there.
+ */
+function stackDepth(points: readonly { slot: number; energy: number }[]): { top: number; bottom: number } {
+  if (points.length === 0) return { top: 0, bottom: 0 };
+  const energies = points.map((q) => q.energy);
+  const [lo, hi] = [Math.min(...energies), Math.max(...energies)];
+  const near = 0.1 * (hi - lo);
+  const most = (keep: (e: number) => boolean) => {
+    const counts = new Map<number, number>();
+    for (const q of points) if (keep(q.energy)) counts.set(q.slot, (counts.get(q.slot) ?? 0) + 1);
+    return Math.max(0, ...counts.values());
+  };
+  return { top: most((e) => e >= hi - near), bottom: most((e) => e <= lo + near) };
 }

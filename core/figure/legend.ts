@@ -1,5 +1,5 @@
 import type { LayoutPathway } from './collectPoints.ts';
-import { BAR_WEIGHT, type FigureContext } from './figureContext.ts';
+import type { FigureContext } from './figureContext.ts';
 import { dashMm, type PathwayPaint } from './pathwayPaint.ts';
 import type { SceneItem } from './scene.ts';
 import { autoSubscript } from './text/autoSubscript.ts';
@@ -33,7 +33,9 @@ export function legend(ctx: FigureContext, pathways: readonly LayoutPathway[], p
     const name = layoutRichText(ctx.autoSubscript ? autoSubscript(spans) : spans, ctx.metrics, ctx.sizeMm);
     return { pathway, paint: paints[i]!, name, w: sample + ctx.gapMm * 2 + name.width };
   });
-  const rowH = ctx.lineMm + ctx.gapMm;
+  // Rows as tall as the tallest name (sub- and superscripts reach past the plain line).
+  const rowH = Math.max(ctx.lineMm, ...entries.map((e) => e.name.ascent + e.name.descent)) + ctx.gapMm;
+  const ascent = Math.max(...entries.map((e) => e.name.ascent));
   const items: SceneItem[] = [];
   let x = x0;
   let row = 0;
@@ -42,11 +44,11 @@ export function legend(ctx: FigureContext, pathways: readonly LayoutPathway[], p
       x = x0;
       row++;
     }
-    const baseline = top + row * rowH + e.name.ascent;
+    const baseline = top + row * rowH + ascent;
     const y = baseline - 0.3 * ctx.sizeMm;
     const bar = sample * 0.4;
     const ids = { pathway: e.pathway.id };
-    items.push({ kind: 'path', role: 'legend', ...ids, stroke: { colour: e.paint.colour, widthMm: BAR_WEIGHT * ctx.strokeMm, cap: 'butt' }, segments: [{ op: 'M', x, y }, { op: 'L', x: x + bar, y }] });
+    items.push({ kind: 'path', role: 'legend', ...ids, stroke: { colour: e.paint.colour, widthMm: e.paint.weight * ctx.strokeMm, cap: 'butt' }, segments: [{ op: 'M', x, y }, { op: 'L', x: x + bar, y }] });
     const stroke = { colour: e.paint.colour, widthMm: ctx.strokeMm, cap: 'butt' as const, ...dashOf(e.paint, ctx.strokeMm) };
     items.push({ kind: 'path', role: 'legend', ...ids, stroke, segments: [{ op: 'M', x: x + bar, y }, { op: 'L', x: x + sample, y }] });
     items.push(textItem(e.name, x + sample + ctx.gapMm, baseline, ctx.theme.ink, 'legend', ids));

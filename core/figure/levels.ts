@@ -35,7 +35,7 @@ export function levels(ctx: FigureContext, pathway: LayoutPathway, paint: Pathwa
     if (level) {
       bars.push({
         kind: 'path', role: 'level', pathway: pathway.id, point: point.pointId,
-        stroke: { colour: paint.colour, widthMm: BAR_WEIGHT * ctx.strokeMm, cap: 'butt' },
+        stroke: { colour: paint.colour, widthMm: paint.weight * ctx.strokeMm, cap: 'butt' },
         segments: [{ op: 'M', x: level.x - level.halfWidth, y: level.y }, { op: 'L', x: level.x + level.halfWidth, y: level.y }],
       });
       placed.push(level);
@@ -46,7 +46,7 @@ export function levels(ctx: FigureContext, pathway: LayoutPathway, paint: Pathwa
 }
 
 /** The box a bar occupies, its stroke thickness included. */
-export function barBox(level: PlacedLevel, ctx: FigureContext): Box {
-  const half = (BAR_WEIGHT * ctx.strokeMm) / 2;
+export function barBox(level: PlacedLevel, ctx: FigureContext, weight = BAR_WEIGHT): Box {
+  const half = (weight * ctx.strokeMm) / 2;
   return { x: level.x - level.halfWidth, y: level.y - half, w: 2 * level.halfWidth, h: 2 * half };
 }

@@ -32,6 +32,9 @@ export interface PathItem {
   fill?: string;
   pathway?: string;
   point?: string;
+  /** For a mark inside a label block (a stacked label's pathway key): as on TextItem. */
+  levels?: { pathway: string; point: string }[];
+  block?: string;
 }
 
 /** A run of text at one size, offset from its item's anchor (baseline, left end). */

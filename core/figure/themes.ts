@@ -36,7 +36,7 @@ export const THEMES: Readonly<Record<ThemeName, Theme>> = {
   },
   greyscale: {
     background: '#FFFFFF', ink: '#000000', muted: '#8C8C8C', dashByPathway: true,
-    palette: ['#000000', '#555555'],
+    palette: ['#000000', '#5C5C5C'],
   },
   // Dark slides: the lighter Okabe–Ito colours read on a near-black page; blue and black do not.
   dark: {

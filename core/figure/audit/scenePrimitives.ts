@@ -69,6 +69,16 @@ export function scenePrimitives(scene: Scene): ScenePrimitives {
 
 function addPath(out: ScenePrimitives, item: PathItem, i: number): void {
   if (item.role === 'background') return;
+  if (item.role === 'label') {
+    // A mark inside a label (a pathway key) is read as part of the label, like its text.
+    const half = (item.stroke?.widthMm ?? 0) / 2;
+    // Butt caps end at the path's ends; only round caps reach past them.
+    const cap = item.stroke?.cap === 'round' ? half : 0;
+    const e = extent(item);
+    const owners = (item.levels ?? [{ pathway: item.pathway ?? '', point: item.point ?? '' }]).map((l) => levelKey(l.pathway, l.point));
+    out.texts.push({ box: { x: e.x - cap, y: e.y - half, w: e.w + 2 * cap, h: e.h + 2 * half }, item: i, role: item.role, block: item.block ?? owners.join('|'), owners });
+    return;
+  }
   if (!item.stroke) {
     if (item.fill) out.areas.push({ box: extent(item), item: i, role: item.role });
     return;

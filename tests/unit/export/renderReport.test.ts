@@ -20,7 +20,7 @@ async function pagesOf(bytes: Uint8Array) {
 }
 
 describe('renderReport', () => {
-  it('prints the figure first, then every section, numbers with units, methods and the caution', async () => {
+  it('prints the figure first, then every section, numbers with units, methods and the caution', { timeout: 30_000 }, async () => {
     const { doc } = analysedDocument();
     const pages = await pagesOf(await renderReport(doc, { fontBytes }));
     expect(pages.length).toBeGreaterThan(1);

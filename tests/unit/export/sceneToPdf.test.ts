@@ -47,7 +47,7 @@ describe('sceneToPdf', () => {
     expect(new TextDecoder('latin1').decode(bytes)).not.toMatch(/\/Subtype\s*\/Image/);
   });
 
-  it('makes the page the figure size, landscape or portrait as the figure is', async () => {
+  it('makes the page the figure size, landscape or portrait as the figure is', { timeout: 30_000 }, async () => {
     const { doc, profile } = scenario({ preset: 'single' });
     const wide = await open(await sceneToPdf(layoutFigure(profile, doc, { metrics }), { fontBytes }));
     const [, , w, h] = wide.page.view as [number, number, number, number];

@@ -19,7 +19,7 @@ const crowded = fc.record({
 });
 
 describe('label placement on crowded profiles', () => {
-  it('never lets label boxes overlap each other or any bar, nor leave the page', () => {
+  it('never lets label boxes overlap each other or any bar, nor leave the page', { timeout: 60_000 }, () => {
     fc.assert(fc.property(crowded, (c) => {
       const specs: PathwaySpec[] = Array.from({ length: c.pathways }, (_, p) => ({
         id: `p${p}`, name: `route ${p}`,

@@ -102,7 +102,7 @@ describe('layoutFigure', () => {
     }
   });
 
-  it('colours pathways from the Okabe–Ito palette and greyscale pathways by dash', () => {
+  it('colours pathways from the Okabe–Ito palette and greyscale pathways by dash and shade', () => {
     const { doc, profile } = twoPathways();
     const colours = new Set(paths(layoutFigure(profile, doc, { metrics }), 'connector').map((p) => p.stroke!.colour));
     expect([...colours].every((c) => (Object.values(OKABE_ITO) as string[]).includes(c))).toBe(true);
@@ -110,7 +110,8 @@ describe('layoutFigure', () => {
     const grey = paths(layoutFigure(profile, doc, { metrics, theme: 'greyscale' }), 'connector');
     const dashes = new Set(grey.map((p) => JSON.stringify(p.stroke!.dashMm ?? 'solid')));
     expect(dashes.size).toBe(2);
-    expect(new Set(grey.map((p) => p.stroke!.colour))).toEqual(new Set(['#000000']));
+    // Without colour, the levels and labels differ too: black and dark grey (issue 11, rule 5).
+    expect(new Set(grey.map((p) => p.stroke!.colour))).toEqual(new Set(['#000000', '#5C5C5C']));
   });
 
   it('keeps labels off the bars and off each other', () => {

@@ -74,7 +74,8 @@ describe('labels that find no room', () => {
   });
 
   it('lists an annotation label it cannot place by its annotation, and draws none of its text', () => {
-    const { doc, profile } = crowded({ preset: 'single', annotations: [{ type: 'barrier', pathway: 'p3', from: 'p3-20', to: 'p3-21' }] });
+    // 40 mm tall: no clear spot is left anywhere for the arrow's label.
+    const { doc, profile } = crowded({ preset: 'single', heightMm: 40, annotations: [{ type: 'barrier', pathway: 'p3', from: 'p3-20', to: 'p3-21' }] });
     const scene = layoutFigure(profile, doc, { metrics });
     const listed = scene.omittedLabels.filter((o) => o.kind === 'annotation');
     expect(listed).toEqual([{ kind: 'annotation', annotation: 0, pathway: 'p3', pathwayName: 'pathway 4', text: expect.stringMatching(/^ΔG‡ = \d+\.\d{3}$/) }]);

@@ -1,0 +1,31 @@
+import { describe, expect, it } from 'vitest';
+import { auditCounts, auditScene } from '../../../core/figure/audit/auditScene.ts';
+import { layoutFigure } from '../../../core/figure/layoutFigure.ts';
+import { resolveProfile } from '../../../core/profile/resolve.ts';
+import { FIGURE_CORPUS } from '../../fixtures/figureCorpus.ts';
+import { fontMetrics } from './fontFixture.ts';
+
+const metrics = fontMetrics();
+const ZERO = { crossings: 0, overlaps: 0, misread: 0, offPage: 0, legendOverContent: 0 };
+
+describe('the figure corpus (issue 11)', () => {
+  it('holds at least 30 invented documents of 2–4 pathways', () => {
+    expect(FIGURE_CORPUS.length).toBeGreaterThanOrEqual(30);
+    for (const e of FIGURE_CORPUS) expect(e.doc.pathways.length, e.name).toBeGreaterThanOrEqual(2);
+    for (const e of FIGURE_CORPUS) expect(e.doc.pathways.length, e.name).toBeLessThanOrEqual(4);
+    expect(FIGURE_CORPUS.some((e) => e.doc.pathways.some((p) => p.cycle))).toBe(true);
+  });
+
+  for (const preset of ['single', 'double', 'slide'] as const) {
+    for (const theme of ['colour', 'greyscale', 'dark'] as const) {
+      it(`audits clean in every document (${preset}, ${theme})`, { timeout: 60_000 }, () => {
+        for (const e of FIGURE_CORPUS) {
+          const scene = layoutFigure(resolveProfile(e.doc), e.doc, { metrics, preset, theme });
+          const audit = auditScene(scene);
+          const faults = [...audit.crossings, ...audit.overlaps, ...audit.misread, ...audit.offPage, ...audit.legendOverContent].map((f) => f.detail);
+          expect({ ...auditCounts(audit), faults: faults.slice(0, 5) }, e.name).toEqual({ ...ZERO, faults: [] });
+        }
+      });
+    }
+  }
+});

@@ -12,26 +12,20 @@ export interface EnergyScale {
 /**
  * Linear scale over the known energies, extended to round numbers and ticked by d3
  * (`scaleLinear().nice().ticks()`); `top`/`bottom` are the mm positions of the domain's
- * high and low ends. An empty or flat set of values gets a unit-wide domain. Fewer
- * ticks are asked for while neighbouring ticks would lie closer than `minSpacingMm`, so
- * tick numbers never touch on a short axis.
+ * high and low ends. An empty or flat set of values gets a unit-wide domain. The domain
+ * is rounded for `tickCount` ticks; fewer ticks are then drawn while neighbouring ticks
+ * would lie closer than `minSpacingMm`, so tick numbers never touch on a short axis.
  */
 export function energyScale(values: readonly number[], bottom: number, top: number, tickCount = 5, minSpacingMm = 0): EnergyScale {
-  for (let count = tickCount; count > 1; count--) {
-    const scale = energyScaleWith(values, bottom, top, count);
-    const [a, b] = scale.ticks;
-    if (a === undefined || b === undefined || Math.abs(scale.y(a) - scale.y(b)) >= minSpacingMm) return scale;
-  }
-  return energyScaleWith(values, bottom, top, 1);
-}
-
-function energyScaleWith(values: readonly number[], bottom: number, top: number, tickCount: number): EnergyScale {
   let lo = Math.min(...values);
   let hi = Math.max(...values);
   if (!Number.isFinite(lo) || !Number.isFinite(hi)) [lo, hi] = [0, 1];
   if (hi - lo < 1e-9) [lo, hi] = [lo - 0.5, hi + 0.5];
   const s = scaleLinear().domain([lo, hi]).range([bottom, top]).nice(tickCount);
   const [d0, d1] = s.domain() as [number, number];
-  const format = s.tickFormat(tickCount);
-  return { y: (v) => s(v), ticks: s.ticks(tickCount), format: (v) => format(v), domain: [d0, d1] };
+  let count = tickCount;
+  let ticks = s.ticks(count);
+  while (count > 1 && ticks.length > 1 && Math.abs(s(ticks[1]!) - s(ticks[0]!)) < minSpacingMm) ticks = s.ticks(--count);
+  const format = s.tickFormat(count);
+  return { y: (v) => s(v), ticks, format: (v) => format(v), domain: [d0, d1] };
 }

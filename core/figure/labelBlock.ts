@@ -26,6 +26,8 @@ export interface LabelBlock {
   energyText: string;
   w: number;
   h: number;
+  /** Further name lines, one per other name of a state that pathways call differently. */
+  more?: RichLine[];
 }
 
 /** Gap between the name and energy lines, in em (our choice). */
@@ -46,6 +48,17 @@ export function labelBlock(label: string, kind: 'min' | 'ts', energy: number, st
   };
 }
 
+/**
+ * The label of one state under several names (pathways that call it differently): each
+ * name on its own line, above the one energy line.
+ */
+export function namesBlock(labels: readonly string[], kind: 'min' | 'ts', energy: number, style: LabelStyle): LabelBlock {
+  const first = labelBlock(labels[0]!, kind, energy, style);
+  const more = labels.slice(1).map((l) => layoutRichText(labelSpans(l, kind, style), style.metrics, style.sizeMm));
+  const extra = more.reduce((h, l) => h + l.ascent + l.descent + LINE_GAP_EM * style.sizeMm, 0);
+  return { ...first, more, w: Math.max(first.w, ...more.map((l) => l.width)), h: first.h + extra };
+}
+
 /** The spans of a level's name as printed: markup read, digits lowered when asked, ‡ after a TS name. */
 export function labelSpans(label: string, kind: 'min' | 'ts', style: LabelStyle): Span[] {
   let spans: Span[] = parseMarkup(label);
@@ -58,9 +71,9 @@ export function labelSpans(label: string, kind: 'min' | 'ts', style: LabelStyle)
 export function blockItems(block: LabelBlock, box: Box, nameColour: string, energyColour: string, ids: Pick<TextItem, 'pathway' | 'point' | 'levels'>): TextItem[] {
   const items: TextItem[] = [];
   let top = box.y;
-  if (block.name) {
-    items.push(textItem(block.name, box.x + (box.w - block.name.width) / 2, top + block.name.ascent, nameColour, 'label', ids));
-    top += block.name.ascent + block.name.descent + LINE_GAP_EM * (block.energy.runs[0]?.sizeMm ?? 0);
+  for (const name of block.name ? [block.name, ...(block.more ?? [])] : []) {
+    items.push(textItem(name, box.x + (box.w - name.width) / 2, top + name.ascent, nameColour, 'label', ids));
+    top += name.ascent + name.descent + LINE_GAP_EM * (block.energy.runs[0]?.sizeMm ?? 0);
   }
   items.push(textItem(block.energy, box.x + (box.w - block.energy.width) / 2, top + block.energy.ascent, energyColour, 'label', ids));
   return items;

@@ -1,6 +1,6 @@
 import type { LayoutPoint } from './collectPoints.ts';
 import type { FigureContext } from './figureContext.ts';
-import { blockItems, labelBlock, type LabelBlock, type LabelStyle } from './labelBlock.ts';
+import { blockItems, labelBlock, namesBlock, type LabelBlock, type LabelStyle } from './labelBlock.ts';
 import { barBox, type PlacedLevel } from './levels.ts';
 import type { PathwayPaint } from './pathwayPaint.ts';
 import { placeLabels, type LabelRequest, type Leader } from './placeLabels.ts';
@@ -91,7 +91,7 @@ export function labels(ctx: FigureContext, placed: readonly PlacedLevel[], paint
 /**
  * Levels in slot order, then pathway order, with levels at one spot printing the same
  * energy joined into one entry: the same state in several pathways, named once, or under
- * each of its names ("AE / LA + AE") when the pathways call it differently.
+ * each of its names (one line each) when the pathways call it differently.
  */
 function twins(ctx: FigureContext, placed: readonly PlacedLevel[], style: LabelStyle, measured: ReadonlyMap<LayoutPoint, LabelBlock>): StackEntry[] {
   const order = [...placed].sort((a, b) => a.x - b.x || a.point.pathwayIndex - b.point.pathwayIndex || a.y - b.y);
@@ -112,7 +112,7 @@ function twins(ctx: FigureContext, placed: readonly PlacedLevel[], style: LabelS
     twin.names.push(level.point.label);
     const first = twin.levels[0]!.point;
     const kind = twin.levels.every((l) => l.point.kind === 'ts') ? 'ts' : 'min';
-    twin.block = labelBlock(twin.names.filter((n) => n.trim() !== '').join(' / '), kind, first.energy!, style);
+    twin.block = namesBlock(twin.names.filter((n) => n.trim() !== ''), kind, first.energy!, style);
   }
   return entries;
 }

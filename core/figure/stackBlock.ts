@@ -35,7 +35,8 @@ export function stackBlock(ctx: FigureContext, entries: readonly StackEntry[], s
   const key = KEY_EM * style.sizeMm;
   const keyGap = KEY_GAP_EM * style.sizeMm;
   const lines = entries.map((e) => {
-    const name: RichLine | null = e.block.name;
+    // A state under several names reads "AE / LA + AE" on its one line of the stack.
+    const name: RichLine | null = e.block.name && e.block.more?.length ? joinLines([e.block.name, ...e.block.more], space, style) : e.block.name;
     const ascent = Math.max(name?.ascent ?? 0, e.block.energy.ascent);
     const descent = Math.max(name?.descent ?? 0, e.block.energy.descent);
     const w = key + keyGap + (name ? name.width + space : 0) + e.block.energy.width;
@@ -70,4 +71,20 @@ export function stackBlock(ctx: FigureContext, entries: readonly StackEntry[], s
       return items;
     },
   };
+}
+
+/** Lines set one after another on one baseline, with " / " between them. */
+function joinLines(lines: readonly RichLine[], space: number, style: LabelStyle): RichLine {
+  const slash = layoutRichText([{ text: '/', shift: 'base' }], style.metrics, style.sizeMm);
+  const runs: RichLine['runs'] = [];
+  let x = 0;
+  lines.forEach((l, i) => {
+    if (i > 0) {
+      runs.push(...slash.runs.map((r) => ({ ...r, dx: r.dx + x + space })));
+      x += slash.width + 2 * space;
+    }
+    runs.push(...l.runs.map((r) => ({ ...r, dx: r.dx + x })));
+    x += l.width;
+  });
+  return { runs, width: x, ascent: Math.max(...lines.map((l) => l.ascent)), descent: Math.max(...lines.map((l) => l.descent)) };
 }

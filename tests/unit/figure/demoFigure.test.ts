@@ -5,6 +5,7 @@ import { resolveProfile } from '../../../core/profile/resolve.ts';
 import { layoutFigure } from '../../../core/figure/layoutFigure.ts';
 import { fontMetrics } from './fontFixture.ts';
 import { barBoxes, intersects, labelBoxes, paths } from './sceneQueries.ts';
+import { auditCounts, auditScene } from '../../../core/figure/audit/auditScene.ts';
 
 const text = readFileSync(new URL('../../../assets/demo/demo.passline', import.meta.url), 'utf8');
 
@@ -29,6 +30,16 @@ describe('the demo figure', () => {
           // Every label stays on the page.
           expect(a.x >= 0 && a.y >= 0 && a.x + a.w <= scene.widthMm && a.y + a.h <= scene.heightMm).toBe(true);
         });
+      });
+    }
+  }
+
+  for (const preset of ['single', 'double', 'slide'] as const) {
+    for (const theme of ['colour', 'greyscale', 'dark'] as const) {
+      it(`passes the geometry audit with nothing to fix (${preset}, ${theme})`, () => {
+        const scene = layoutFigure(profile, loaded.doc, { metrics: fontMetrics(), preset, theme });
+        expect(auditCounts(auditScene(scene))).toEqual({ crossings: 0, overlaps: 0, misread: 0, offPage: 0, legendOverContent: 0 });
+        expect(scene.omittedLabels).toEqual([]);
       });
     }
   }

@@ -196,8 +196,9 @@ describe('Hess route', () => {
     { id: 'P', label: 'CO2 + H2', kind: 'min', energy: { mode: 'formation', terms: terms('CO2', 'H2') } },
   ], { settings: { quantity, unit: 'kJ/mol' }, species: janaf });
 
-  it('gives ΔrG° = −28.644 and ΔrH° = −41.169 kJ/mol for CO + H2O → CO2 + H2', () => {
-    expect(resolveProfile(shift('G')).pathways[0]!.points[1]!.energyJ! / 1000).toBeCloseTo(-28.644, 3);
+  it('gives ΔrG° = ΔrH° − TΔrS° = −28.6431222 and ΔrH° = −41.169 kJ/mol for CO + H2O → CO2 + H2', () => {
+    // REFERENCE.md §4 R3: the ΔrH° − TΔrS° column (ΣνΔfG° = −28.644 differs by table rounding only).
+    expect(resolveProfile(shift('G')).pathways[0]!.points[1]!.energyJ! / 1000).toBeCloseTo(-28.6431222, 6);
     expect(resolveProfile(shift('H')).pathways[0]!.points[1]!.energyJ! / 1000).toBeCloseTo(-41.169, 3);
     expect(resolveProfile(shift('G')).findings).toEqual([]);
   });
@@ -209,7 +210,7 @@ describe('Hess route', () => {
       { id: 'P', label: 'CO2 + H2', kind: 'min', energy: { mode: 'formation', terms: terms('CO2', 'H2') } },
     ], { settings: { unit: 'kJ/mol' }, species: janaf });
     const profile = resolveProfile(doc);
-    expect(profile.pathways[0]!.points[2]!.energyJ! / 1000).toBeCloseTo(-28.644, 3); // NIST-JANAF ΔrG° of R3
+    expect(profile.pathways[0]!.points[2]!.energyJ! / 1000).toBeCloseTo(-28.6431222, 6); // NIST-JANAF ΔrH° − TΔrS° of R3
     expect(profile.pathways[0]!.points[2]!.provenance.route).toBe('formation');
     expect(profile.findings).toEqual([]);
   });

@@ -118,7 +118,26 @@ describe('species sums', () => {
     });
     const profile = resolveProfile(doc);
     close(energies(profile)[1], -0.264218906313, 1e-8);
-    expect(profile.pathways[0]!.points[1]!.provenance.detail).toContain('3 conformers, populations 64.0% / 27.5% / 8.4%');
+    expect(profile.pathways[0]!.points[1]!.provenance.detail).toContain('3 conformers, populations from G 64.0% / 27.5% / 8.4%');
+  });
+
+  it('with quantity H the ensemble enthalpy is Σ pᵢ(G) Hᵢ, populations from G (REFERENCE.md §8 populations)', () => {
+    // G = 0.0, 0.5, 1.2 kcal/mol → p = 0.6402155195, 0.2753110573, 0.08447342317 (REFERENCE.md §8);
+    // H = 3.0, 1.0, 0.0 kcal/mol → Σ pᵢ Hᵢ computed here by hand from those populations.
+    const conformers = [[3, 0], [1, 0.5], [0, 1.2]].map(([h, g]) => ({ electronic: kcalToHartree(-500), hCorrection: kcalToHartree(h!), gCorrection: kcalToHartree(g!) }));
+    const doc = onePathway([state('ref', 'min', [['X', 1]]), state('ens', 'min', [['Y', 1]])], {
+      settings: { quantity: 'H' },
+      species: [species('X', -500), { id: 'Y', label: 'Y', structures: conformers }],
+    });
+    const profile = resolveProfile(doc);
+    close(energies(profile)[1], 3 * 0.6402155195 + 1 * 0.2753110573, 1e-8);
+    expect(profile.pathways[0]!.points[1]!.provenance.detail).toContain('populations from G');
+    expect(codes(profile)).not.toContain('conformer-weights-not-g');
+    const noG = onePathway([state('ref', 'min', [['X', 1]]), state('ens', 'min', [['Y', 1]])], {
+      settings: { quantity: 'H' },
+      species: [species('X', -500), { id: 'Y', label: 'Y', structures: conformers.map(({ gCorrection: _g, ...c }) => c) }],
+    });
+    expect(codes(resolveProfile(noG))).toContain('conformer-weights-not-g');
   });
 
   it('rescales G to another temperature as H − T·S and flags the approximation', () => {

@@ -46,12 +46,18 @@ export const CURTIN_HAMMETT_ASSUMPTION = 'Curtin–Hammett control: the states b
 /**
  * Product distribution between pathways resolved on a common reference. Each pathway
  * contributes its highest TS, or, when `tsIds[pathway.id]` names several of its TSs, their
- * Boltzmann sum. A TS below a neighbouring minimum counts at that minimum (`tsTopEnergies`,
+ * Boltzmann sum. Pathways whose energies do not share one zero (different `scaleKey`) are
+ * refused with a finding. A TS below a neighbouring minimum counts at that minimum (`tsTopEnergies`,
  * the rule the step rates use). A pathway with no usable TS gives a finding and is left out.
  */
 export function competingPathways(pathways: readonly ResolvedPathway[], temperatureK: number, tsIds: Readonly<Record<string, readonly string[]>> = {}): { result: CompetingPathways | null; findings: Finding[] } {
   const findings = checkConditions({ temperatureK });
   if (findings.length > 0) return { result: null, findings };
+  const scales = new Set(pathways.map((p) => p.scaleKey).filter((k) => k !== undefined));
+  if (scales.size > 1) {
+    const names = pathways.map((p) => `"${p.name}"`).join(', ');
+    return { result: null, findings: [{ severity: 'error', code: 'no-common-scale', pathway: pathways[0]?.id, message: `no selectivity between ${names}: their energies are not measured from one zero (each pathway from its own first point, or on different scales), so their TS energies cannot be compared; use the document-wide zero, a shared reference point or species sum, or let one pathway branch from a point of the other` }] };
+  }
   const channels: SelectivityChannel[] = [];
   for (const p of pathways) {
     const chosen = tsIds[p.id];

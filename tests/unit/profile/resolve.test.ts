@@ -31,9 +31,20 @@ describe('typed and stepwise entry', () => {
     expect(profile.findings).toEqual([]);
   });
 
-  it('makes every pathway relative to its first point', () => {
+  it('shows typed values as typed under the default document-wide zero', () => {
+    // Old code re-zeroed every pathway to its first point: 5, 25, 1 came out as 0, 20, −4.
     const profile = resolveProfile(onePathway([typed('R', 'min', 5), typed('T', 'ts', 25), typed('P', 'min', 1)]));
+    expect(energies(profile)).toEqual([5, 25, 1]);
+    expect(profile.reference?.kind).toBe('zero');
+  });
+
+  it('keeps a format-2 document\'s meaning: each pathway from its own first point, said in a finding', () => {
+    const doc = parseDocument(JSON.stringify({ format: 'passline', version: 2, pathways: [{ id: 'a', name: 'A', points: [typed('R', 'min', 5), typed('T', 'ts', 25), typed('P', 'min', 1)] }] }));
+    if (!doc.ok) throw new Error('bad doc');
+    expect(doc.doc.settings.reference).toEqual({ kind: 'first' });
+    const profile = resolveProfile(doc.doc);
     expect(energies(profile)).toEqual([0, 20, -4]);
+    expect(codes(profile)).toContain('first-point-rezeroed');
   });
 
   it('uses a shared reference point across pathways when chosen', () => {
@@ -55,7 +66,7 @@ describe('typed and stepwise entry', () => {
     fc.assert(fc.property(fc.array(fc.double({ min: -50, max: 50, noNaN: true }), { minLength: 3, maxLength: 9 }), fc.double({ min: -1e4, max: 1e4, noNaN: true }), (values, shift) => {
       const build = (offset: number) => onePathway(values.map((v, i) => typed(`p${i}`, i % 2 ? 'ts' : 'min', v + offset)));
       const a = energies(resolveProfile(build(0))), b = energies(resolveProfile(build(shift)));
-      return a.every((v, i) => Math.abs(v! - b[i]!) < 1e-7);
+      return a.every((v, i) => Math.abs((v! - a[0]!) - (b[i]! - b[0]!)) < 1e-7);
     }));
   });
 });

@@ -1,6 +1,7 @@
 import type { Document } from '../model/schema.ts';
 import { analyseDocument } from './analyseDocument.ts';
 import { spaced } from '../kinetics/temperatureScan.ts';
+import { formationRoute } from '../profile/formationSum.ts';
 
 /** What a series holds: forward rate constants, equilibrium constants, cycle TOF or product shares. */
 export type ScanKind = 'k' | 'K' | 'TOF' | 'share';
@@ -26,13 +27,18 @@ export interface DocumentScan {
   approximations: string[];
 }
 
-/** Typed, stepwise and estimated energies do not change with T; species sums are re-resolved. */
+/**
+ * Typed, stepwise and estimated energies do not change with T; species sums are re-resolved;
+ * formation-data states follow ΔfH° − T·S° when the document has ΔfH° and S° for them.
+ */
 function approximationOf(doc: Document, pathwayIndex: number): string {
   const pathway = doc.pathways[pathwayIndex]!;
-  const fromSpecies = pathway.points.every((p) => p.energy.mode === 'species');
-  return fromSpecies
-    ? `${pathway.name}: every state re-resolved at each T (G = H − T·S from the thermal corrections, standard-state terms at T)`
-    : `${pathway.name}: G values held at their input temperature; only k_BT/h and RT change`;
+  const modes = new Set(pathway.points.map((p) => p.energy.mode));
+  const followsT = doc.settings.quantity === 'G' && modes.has('formation') && formationRoute(doc) === 'dH-TS';
+  if (modes.size === 1 && modes.has('species')) return `${pathway.name}: every state re-resolved at each T (G = H − T·S from the thermal corrections, standard-state terms at T)`;
+  if (modes.size === 1 && followsT) return `${pathway.name}: every state re-resolved at each T (G = Σ(ΔfH° − T·S°) from 298.15 K formation data, ΔrH° and ΔrS° taken constant)`;
+  if (modes.has('species') || followsT) return `${pathway.name}: species and formation-data states re-resolved at each T; typed and stepwise values held at their input temperature`;
+  return `${pathway.name}: G values held at their input temperature; only k_BT/h and RT change`;
 }
 
 /**

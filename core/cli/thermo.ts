@@ -1,7 +1,7 @@
 import { thermoReport } from '../thermo/thermoReport.ts';
 import { CliError, EXIT_USAGE, type CliIo } from './io.ts';
 import { positiveOption } from './options.ts';
-import { solveLine } from './thermoSolve.ts';
+import { solveFormation, solvedLine } from './thermoSolve.ts';
 import { readText } from './readText.ts';
 
 export interface ThermoOptions {
@@ -21,7 +21,8 @@ export function runThermo(tablePath: string, options: ThermoOptions, io: CliIo):
   const text = readText(tablePath, io);
   if (options.solve !== undefined || options.given !== undefined) {
     if (!options.solve || !options.given) throw new CliError('thermo: --solve SPECIES and --given dH=VALUE go together', EXIT_USAGE);
-    io.out(solveLine(text, options.reaction, options.solve, options.given));
+    const solved = solveFormation(text, options.reaction, options.solve, options.given);
+    io.out(options.json ? `${JSON.stringify(solved, null, 2)}\n` : solvedLine(solved));
     return;
   }
   const report = thermoReport(text, options.reaction, temperatureK);
@@ -38,7 +39,7 @@ export function runThermo(tablePath: string, options: ThermoOptions, io: CliIo):
     `  ΔrS°              ${num(r.dS, 3)} J mol⁻¹ K⁻¹`,
     `  ΔrG° (ΔH − TΔS)   ${num(r.dG, 3)} kJ mol⁻¹`,
     `  ΔrG° (Σ ΔfG°)     ${num(r.dGfromFormation, 3)} kJ mol⁻¹`,
-    `  K                 ${r.K === null ? '—' : r.K.toPrecision(6)}`,
+    `  K                 ${r.K === null ? '—' : r.K.toPrecision(6)}   (from ${r.KBasis === 'dH-TdS' ? 'ΔrH° − TΔrS°' : 'Σ ΔfG°'}; K refers to the formation table's standard state)`,
     `  crossover T       ${r.crossoverK === null ? '—' : `${r.crossoverK.toFixed(1)} K`}`,
     ...r.warnings.map((w) => `  note: ${w}`),
     '',

@@ -27,10 +27,11 @@ export function deletePathway(doc: Document, args: { pathway: string }): Documen
     return rest.length === c.pathways.length ? [c] : rest.length >= 2 ? [{ ...c, pathways: rest }] : [];
   });
   const annotations = doc.figure.annotations.filter((a) => a.type === 'text' || a.pathway !== id);
-  const reference = doc.settings.reference.kind === 'point' && doc.settings.reference.pathway === id ? { kind: 'first' as const } : doc.settings.reference;
+  const reference = doc.settings.reference.kind === 'point' && doc.settings.reference.pathway === id ? { kind: 'zero' as const } : doc.settings.reference;
   return {
     ...doc,
-    pathways: doc.pathways.filter((p) => p.id !== id),
+    // A pathway that branched from the removed one keeps its points on the document zero.
+    pathways: doc.pathways.filter((p) => p.id !== id).map((p) => (p.branch?.pathway === id ? (({ branch: _b, ...rest }) => rest)(p) : p)),
     comparisons,
     figure: { ...doc.figure, annotations },
     settings: reference === doc.settings.reference ? doc.settings : { ...doc.settings, reference },

@@ -29,7 +29,8 @@ export function insertPoint(doc: Document, args: { pathway: string; index?: numb
 
 /**
  * Removes a point, with the barrier annotations that name it; a shared reference at the
- * point falls back to each pathway's first point (the document must stay loadable).
+ * point falls back to the document-wide zero (the document must stay loadable); a pathway
+ * that branched from the point keeps its points on that zero.
  */
 export function deletePoint(doc: Document, ref: PointRef): Document {
   const next = mapPathway(doc, ref.pathway, (pathway) => {
@@ -40,10 +41,14 @@ export function deletePoint(doc: Document, ref: PointRef): Document {
   const names = (a: Document['figure']['annotations'][number]) => a.type === 'barrier' && a.pathway === ref.pathway && (a.from === ref.point || a.to === ref.point);
   const r = doc.settings.reference;
   const atPoint = r.kind === 'point' && r.pathway === ref.pathway && r.point === ref.point;
+  const unbranched = next.pathways.some((p) => p.branch?.pathway === ref.pathway && p.branch.point === ref.point)
+    ? next.pathways.map((p) => (p.branch?.pathway === ref.pathway && p.branch.point === ref.point ? (({ branch: _b, ...rest }) => rest)(p) : p))
+    : next.pathways;
   return {
     ...next,
+    pathways: unbranched,
     figure: doc.figure.annotations.some(names) ? { ...doc.figure, annotations: doc.figure.annotations.filter((a) => !names(a)) } : doc.figure,
-    settings: atPoint ? { ...doc.settings, reference: { kind: 'first' } } : doc.settings,
+    settings: atPoint ? { ...doc.settings, reference: { kind: 'zero' } } : doc.settings,
   };
 }
 

@@ -2,6 +2,7 @@ import type { Finding, ResolvedPathway } from '../profile/types.ts';
 import { rtJoules } from '../units/index.ts';
 import { checkConditions } from './conditions.ts';
 import { effectiveBarrier, type EffectiveBarrier } from './effectiveBarrier.ts';
+import { tsTopEnergies } from './tsTopEnergies.ts';
 import { productDistribution, type ChannelShare, type PairSelectivity, type SelectivityChannel } from './productDistribution.ts';
 
 /** Catalysed-vs-uncatalysed style comparison of two pathways' effective barriers. */
@@ -45,15 +46,23 @@ export const CURTIN_HAMMETT_ASSUMPTION = 'Curtin–Hammett control: the states b
 /**
  * Product distribution between pathways resolved on a common reference. Each pathway
  * contributes its highest TS, or, when `tsIds[pathway.id]` names several of its TSs, their
- * Boltzmann sum. A pathway with no usable TS gives a finding and is left out.
+ * Boltzmann sum. Pathways whose energies do not share one zero (different `scaleKey`) are
+ * refused with a finding. A TS below a neighbouring minimum counts at that minimum (`tsTopEnergies`,
+ * the rule the step rates use). A pathway with no usable TS gives a finding and is left out.
  */
 export function competingPathways(pathways: readonly ResolvedPathway[], temperatureK: number, tsIds: Readonly<Record<string, readonly string[]>> = {}): { result: CompetingPathways | null; findings: Finding[] } {
   const findings = checkConditions({ temperatureK });
   if (findings.length > 0) return { result: null, findings };
+  const scales = new Set(pathways.map((p) => p.scaleKey).filter((k) => k !== undefined));
+  if (scales.size > 1) {
+    const names = pathways.map((p) => `"${p.name}"`).join(', ');
+    return { result: null, findings: [{ severity: 'error', code: 'no-common-scale', pathway: pathways[0]?.id, message: `no selectivity between ${names}: their energies are not measured from one zero (each pathway from its own first point, or on different scales), so their TS energies cannot be compared; use the document-wide zero, a shared reference point or species sum, or let one pathway branch from a point of the other` }] };
+  }
   const channels: SelectivityChannel[] = [];
   for (const p of pathways) {
     const chosen = tsIds[p.id];
-    const candidates = p.points.filter((q) => q.kind === 'ts' && (chosen === undefined || chosen.includes(q.id)));
+    const tops = tsTopEnergies(p.points);
+    const candidates = p.points.map((q, i) => ({ ...q, energyJ: tops[i] ?? null })).filter((q) => q.kind === 'ts' && (chosen === undefined || chosen.includes(q.id)));
     for (const id of chosen ?? []) {
       if (!candidates.some((q) => q.id === id)) findings.push({ severity: 'error', code: 'unknown-ts', message: `pathway "${p.name}" has no TS with id "${id}"`, pathway: p.id, point: id });
     }

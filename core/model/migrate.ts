@@ -5,7 +5,8 @@ type Json = Record<string, unknown>;
 /**
  * Upgrades older document shapes one version at a time. Version 1 was the early draft
  * format: points without ids and with a bare number as energy, read in `settings.unit`
- * (kcal/mol when absent).
+ * (kcal/mol when absent). Version 2 had no document-wide zero: its implicit reference
+ * (each pathway's first point) is made explicit.
  */
 const MIGRATIONS: Record<number, (doc: Json) => Json> = {
   1: (doc) => {
@@ -25,6 +26,13 @@ const MIGRATIONS: Record<number, (doc: Json) => Json> = {
         })),
       })),
     };
+  },
+  // Format 2 measured every pathway from its own first point unless a shared point was set;
+  // format 3 defaults to one document-wide zero. The old default is written out, so an old
+  // document keeps its numbers (choose the document zero to show typed values as typed).
+  2: (doc) => {
+    const settings = (typeof doc.settings === 'object' && doc.settings !== null ? doc.settings : {}) as Json;
+    return { ...doc, version: 3, settings: { ...settings, reference: settings.reference ?? { kind: 'first' } } };
   },
 };
 

@@ -45,6 +45,15 @@ export function referenceProblems(doc: Document): DocumentError[] {
     }
   });
   const ref = doc.settings.reference;
+  if (ref.kind === 'species') ref.terms.forEach((t, k) => {
+    if (!speciesIds.has(t.species)) errors.push({ path: `settings.reference.terms[${k}].species`, message: `no species with id "${t.species}"` });
+  });
+  doc.pathways.forEach((pathway, i) => {
+    const b = pathway.branch;
+    const from = b && doc.pathways.find((p) => p.id === b.pathway);
+    if (b && !from) errors.push({ path: `pathways[${i}].branch.pathway`, message: `no pathway with id "${b.pathway}"` });
+    else if (b && from && !from.points.some((p) => p.id === b.point)) errors.push({ path: `pathways[${i}].branch.point`, message: `no point with id "${b.point}" in pathway "${from.name}"` });
+  });
   if (ref.kind === 'point') {
     const pathway = doc.pathways.find((p) => p.id === ref.pathway);
     if (!pathway) errors.push({ path: 'settings.reference.pathway', message: `no pathway with id "${ref.pathway}"` });

@@ -7,7 +7,7 @@ import { ENERGY_UNITS } from '../units/energy.ts';
  * never changes what the user typed.
  */
 export const FORMAT_ID = 'passline';
-export const FORMAT_VERSION = 2;
+export const FORMAT_VERSION = 3;
 
 const finite = (what: string) =>
   z.number({ error: (issue) => `expected a number${what}, got ${describe(issue.input)}` })
@@ -106,10 +106,15 @@ export const PathwayStyle = z.strictObject({
   visible: z.boolean().default(true),
 });
 
+/** A point of another pathway that a pathway starts from: its first point is drawn at that point's energy. */
+export const Branch = z.strictObject({ pathway: z.string().min(1), point: z.string().min(1) });
+
 export const Pathway = z.strictObject({
   id: z.string().min(1),
   name: z.string(),
   cycle: z.boolean().default(false),
+  /** This pathway branches from a point of another: its energies are shifted so its first point sits there. */
+  branch: Branch.optional(),
   style: PathwayStyle.default({ visible: true }),
   points: z.array(Point),
 });
@@ -122,11 +127,19 @@ export const Settings = z.strictObject({
   standardState: z.enum(['as-computed', '1atm-to-1M', '1bar-to-1M']).default('as-computed'),
   decimals: z.int().min(0).max(6).default(1),
   transmission: positive('').default(1),
-  /** Shared reference state for all pathways, or each pathway's first point. */
+  /**
+   * What every energy is measured from (see core/profile/referenceFrame.ts):
+   * `zero` (default) one document-wide zero — typed and stepwise values are shown as typed,
+   * species sums and formation sums are relative to the document's first state on their scale;
+   * `point` one chosen point shared by all pathways; `species` a sum of species shared by all
+   * pathways; `first` each pathway's own first point (format 2 documents, kept by migration).
+   */
   reference: z.union([
+    z.strictObject({ kind: z.literal('zero') }),
     z.strictObject({ kind: z.literal('first') }),
     z.strictObject({ kind: z.literal('point'), pathway: z.string(), point: z.string() }),
-  ]).default({ kind: 'first' }),
+    z.strictObject({ kind: z.literal('species'), terms: z.array(SpeciesTerm).min(1, 'expected at least one species') }),
+  ]).default({ kind: 'zero' }),
 });
 
 export const Figure = z.strictObject({
@@ -177,6 +190,8 @@ export type EnergySpec = z.infer<typeof EnergySpec>;
 export type Point = z.infer<typeof Point>;
 export type PathwayStyle = z.infer<typeof PathwayStyle>;
 export type Pathway = z.infer<typeof Pathway>;
+export type Branch = z.infer<typeof Branch>;
+export type Reference = z.infer<typeof Settings>['reference'];
 export type Settings = z.infer<typeof Settings>;
 export type Figure = z.infer<typeof Figure>;
 export type Comparison = z.infer<typeof Comparison>;

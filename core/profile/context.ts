@@ -1,4 +1,5 @@
 import type { Document, Quantity, Species } from '../model/schema.ts';
+import { formationRoute, type FormationRoute } from './formationSum.ts';
 
 /** What every point resolver needs to know about the document. */
 export interface ResolveContext {
@@ -7,6 +8,8 @@ export interface ResolveContext {
   standardState: Document['settings']['standardState'];
   transmission: number;
   species: ReadonlyMap<string, Species>;
+  /** How formation-data states give G (see {@link FormationRoute}). */
+  formationRoute: FormationRoute;
 }
 
 /** Builds the resolver context from a validated document. */
@@ -17,5 +20,6 @@ export function makeContext(doc: Document): ResolveContext {
     standardState: doc.settings.standardState,
     transmission: doc.settings.transmission,
     species: new Map(doc.species.map((s) => [s.id, s])),
+    formationRoute: formationRoute(doc),
   };
 }

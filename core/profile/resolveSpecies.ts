@@ -23,6 +23,9 @@ export function resolveSpeciesState(terms: readonly SpeciesTerm[], ctx: ResolveC
     }
     if (total !== null) total += term.count * energy.valueJ;
     if (energy.notes.length) notes.push(`${species.label}: ${energy.notes.join(', ')}`);
+    if (energy.weightsFromOwnQuantity) {
+      findings.push({ severity: 'warning', code: 'conformer-weights-not-g', ...where, message: `${species.label}: conformers are weighted by exp(−${ctx.quantity}/RT) because not every conformer has a G correction; equilibrium populations follow G` });
+    }
     const t0 = species.correctionTemperatureK ?? DEFAULT_CORRECTION_T;
     if (ctx.quantity !== 'E' && Math.abs(t0 - ctx.temperatureK) > 1e-9) {
       const text = energy.rescaled

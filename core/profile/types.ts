@@ -1,4 +1,5 @@
 import type { PointKind, Quantity, Unit } from '../model/schema.ts';
+import type { ResolvedReference } from './referenceFrame.ts';
 
 /** Where a resolved energy came from. */
 export type Route = 'typed' | 'species' | 'formation' | 'step' | 'barrier' | 'estimate' | 'missing';
@@ -24,6 +25,11 @@ export interface ResolvedPathway {
   id: string;
   name: string;
   cycle: boolean;
+  /**
+   * Pathways with equal keys share one zero; energies of pathways with different keys are not
+   * comparable. Absent on hand-built pathways, which are taken to share one zero.
+   */
+  scaleKey?: string;
   points: ResolvedPoint[];
 }
 
@@ -45,6 +51,8 @@ export interface ResolvedProfile {
   /** Display unit chosen for output (energies here stay in J/mol). */
   unit: Unit;
   temperatureK: number;
+  /** What every energy is measured from (absent on hand-built profiles). */
+  reference?: ResolvedReference;
   pathways: ResolvedPathway[];
   findings: Finding[];
 }

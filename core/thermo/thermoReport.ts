@@ -16,6 +16,14 @@ export interface ThermoReportResult {
   /** Σ ν ΔfG° — only at the table temperature (298.15 K), else null. */
   dGfromFormation: number | null;
   K: number | null;
+  /**
+   * The route K = exp(−ΔrG°/RT) takes: `dH-TdS` (ΔrH° − TΔrS°, used at every temperature when
+   * ΔfH° and S° are all known, so K(T) is continuous) or `dfG` (ΣνΔfG°, 298.15 K only, when
+   * ΔfH° or S° is missing). Standard state: that of the table (1 bar for NIST-JANAF).
+   */
+  KBasis: 'dH-TdS' | 'dfG';
+  /** K from ΣνΔfG° at 298.15 K, for comparison with `K` (differs by table rounding); else null. */
+  KfromFormation: number | null;
   crossoverK: number | null;
   warnings: string[];
 }
@@ -32,7 +40,8 @@ const fmt = (x: number, digits = 3): string => x.toFixed(digits);
 /**
  * Reaction thermochemistry from a formation table (CSV, see {@link parseFormationTable}) and a
  * reaction string at one temperature: Hess's law sums, ΔrG° both ways, K = exp(−ΔrG°/RT)
- * (from ΣνΔfG° at 298.15 K when available, else from ΔrH° − TΔrS°), crossover temperature, and
+ * (from ΔrH° − TΔrS° whenever both are known, at every temperature, so K(T) has no step at
+ * 298.15 K; from ΣνΔfG° at 298.15 K otherwise; `KBasis` says which), crossover temperature, and
  * warnings for approximations. The CLI `passline thermo` prints this result as is.
  */
 export function thermoReport(tableText: string, reactionText: string, temperatureK: number): ThermoReport {
@@ -57,7 +66,8 @@ export function thermoReport(tableText: string, reactionText: string, temperatur
     `no ${FORMATION_LABELS[key]} for ${hess.missing[key].map((s) => `${s} (row ${rows.get(s)})`).join(', ')}`;
   const atTableT = Math.abs(temperatureK - TABLE_T) < 0.005;
   const dGf = hess.dGFormationJ;
-  const dGforK = atTableT && dGf !== null ? dGf : hess.dGJ;
+  const KBasis = hess.dGJ !== null || !atTableT || dGf === null ? 'dH-TdS' : 'dfG';
+  const dGforK = KBasis === 'dH-TdS' ? hess.dGJ : dGf;
   if (dGforK === null) {
     const reasons = (['dfH', 'S'] as const).filter((k) => hess.missing[k].length > 0).map(missingText);
     if (atTableT) reasons.push(missingText('dfG'));
@@ -91,6 +101,8 @@ export function thermoReport(tableText: string, reactionText: string, temperatur
       dG: kj(hess.dGJ),
       dGfromFormation: atTableT ? kj(dGf) : null,
       K: Number.isFinite(K) ? K : null,
+      KBasis,
+      KfromFormation: atTableT && dGf !== null && Number.isFinite(Math.exp(lnEquilibriumConstant(dGf, temperatureK))) ? Math.exp(lnEquilibriumConstant(dGf, temperatureK)) : null,
       crossoverK,
       warnings,
     },

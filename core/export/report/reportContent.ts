@@ -29,7 +29,7 @@ export function reportContent(pages: ReportPages, doc: Document, analysis: Docum
     ['standard state', STANDARD_STATES[s.standardState]],
     ['energy unit', unit],
     ['transmission coefficient κ', String(s.transmission)],
-    ['reference state', s.reference.kind === 'first' ? 'first point of each pathway' : `${s.reference.point} of ${s.reference.pathway}`],
+    ['reference state', s.reference.kind === 'point' ? `${s.reference.point} of ${s.reference.pathway}` : { first: 'first point of each pathway', zero: 'one document-wide zero (typed values as typed)', species: 'a sum of species shared by all pathways' }[s.reference.kind]],
   ]);
   section(pages, 'Energies and where they come from', tables.points);
   section(pages, 'Steps', stepsForPage(report, s.decimals), 'Rate constants from the Eyring equation with their units; t½ is the first-order half-life of the forward step.');

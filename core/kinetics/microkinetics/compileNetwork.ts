@@ -10,6 +10,8 @@ export interface CompiledNetwork {
   tallyIndex: number;
   rhs: RhsFunction;
   jacobian: JacobianFunction;
+  /** Net change of every component per unit extent of each reaction (species, then the tally). */
+  netChanges: Float64Array[];
   /** Net rate (forward − reverse, mol L⁻¹ s⁻¹) of reaction r at state y. */
   netRate: (r: number, y: Float64Array) => number;
 }
@@ -81,5 +83,5 @@ export function compileNetwork(network: MassActionNetwork): CompiledNetwork {
       }
     }
   };
-  return { size, speciesCount: m, tallyIndex, rhs, jacobian, netRate };
+  return { size, speciesCount: m, tallyIndex, rhs, jacobian, netRate, netChanges: steps.map((st) => st.net) };
 }

@@ -20,6 +20,8 @@ export interface IntegrateOptions {
   initialStep?: number;
   /** Reject steps that drive a component below −(its error scale) and clip smaller negatives to 0; true for all components or one flag per component. */
   nonNegative?: boolean | readonly boolean[];
+  /** Called on every accepted state (after clipping), e.g. to project it back onto conservation laws; may change y in place. */
+  project?: (y: Float64Array) => void;
 }
 
 /** Work counters of one integration. */

@@ -78,6 +78,7 @@ export function integrate(
       stats.steps++;
       t = landing ? target : t + hTry;
       [y, yNew] = [yNew, y];
+      options.project?.(y);
       rhs(y, f);
       calls.rhs++;
       if (!f.every(Number.isFinite)) return fail('non-finite', `the right-hand side is not finite at t = ${t}`, t);

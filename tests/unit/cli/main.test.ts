@@ -82,7 +82,10 @@ describe('passline thermo', () => {
     expect(r.dS).toBeCloseTo(-242.85, 3);
     expect(r.dG).toBeCloseTo(-817.9032725, 6);
     expect(r.dGfromFormation).toBeCloseTo(-817.903, 3);
-    expect(r.K / 1.95166899547e143).toBeCloseTo(1, 9);
+    // K = exp(−dG/RT) with the reported dG (KBasis dH-TdS); ΣνΔfG° gives 1.95166899547e+143 beside it.
+    expect(r.KBasis).toBe('dH-TdS');
+    expect(r.K / Math.exp(817903.2725 / (8.31446261815324 * 298.15))).toBeCloseTo(1, 9);
+    expect(r.KfromFormation / 1.95166899547e143).toBeCloseTo(1, 9);
     expect(r.crossoverK).toBeCloseTo(3666.086061, 5);
     expect(r.warnings.join(' ')).toContain('not a process-safety assessment');
   });
@@ -92,6 +95,9 @@ describe('passline thermo', () => {
     expect(code).toBe(0);
     expect(out).toMatch(/^ΔfH°\(CH4\(g\)\) = -74\.873 kJ mol⁻¹/);
     expect((await run(['thermo', 'tests/fixtures/janafCombustion.csv', '--reaction', reaction, '--solve', 'CH4(g)', '--given', 'dX=1'])).code).toBe(2);
+    const json = await run(['thermo', 'tests/fixtures/janafCombustion.csv', '--reaction', reaction, '--solve', 'CH4(g)', '--given', 'dH=-890.309', '--json']);
+    expect(JSON.parse(json.out)).toMatchObject({ species: 'CH4(g)', key: 'dfH', unit: 'kJ mol⁻¹', given: { value: -890.309 } });
+    expect(JSON.parse(json.out).value).toBeCloseTo(-74.873, 9);
   });
 
   it('names an unknown species, an unbalanced reaction and a missing option', async () => {

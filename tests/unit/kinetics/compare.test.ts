@@ -60,3 +60,16 @@ describe('competingPathways', () => {
     expect(r.result!.pair).toBeNull();
   });
 });
+
+describe('competingPathways reads TS energies through the raise rule', () => {
+  it('a TS below its product counts at the product energy (Curtin–Hammett on the energies k uses)', async () => {
+    const { competingPathways } = await import('../../../core/kinetics/compare.ts');
+    const { pathway: build, kcal: kc } = await import('./build.ts');
+    const a = build([['R', 'min', 0], ['TSa', 'ts', 10], ['Pa', 'min', 11]], { id: 'a' });
+    const b = build([['R', 'min', 0], ['TSb', 'ts', 10.5], ['Pb', 'min', -5]], { id: 'b' });
+    const { result } = competingPathways([a, b], 298.15);
+    // Expected from REFERENCE.md §8 ratio = exp(ΔΔG‡/RT) with ΔΔG‡ = 10.5 − 11.0 = −0.5 kcal/mol.
+    const ratio = Math.exp(kc(-0.5) / (8.31446261815324 * 298.15));
+    expect(result!.channels[0]!.fraction / result!.channels[1]!.fraction).toBeCloseTo(ratio, 10);
+  });
+});

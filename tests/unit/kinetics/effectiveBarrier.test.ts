@@ -44,3 +44,26 @@ describe('effectiveBarrier', () => {
     expect(effectiveBarrier(pathway([['A', 'min', 0]])).findings.map((f) => f.code)).toEqual(['no-barrier']);
   });
 });
+
+describe('effectiveBarrier uses the raised TS of the step rates', () => {
+  // Independent reference: the step's own Eyring k (analyseSteps, which applies stepTopEnergy)
+  // inverted with ΔG‡ = RT ln(κ k_BT / (h k)) (IUPAC Gold Book "Gibbs energy of activation").
+  it('a TS below the following minimum is raised to it (11.4 → 12.2 kcal/mol)', async () => {
+    const { analyseSteps } = await import('../../../core/kinetics/index.ts');
+    const { kbtOverH, rtJoules } = await import('../../../core/units/index.ts');
+    const p = pathway([['A', 'min', 0], ['TS', 'ts', 11.4], ['B', 'min', 12.2]]);
+    const { result } = effectiveBarrier(p);
+    const k = analyseSteps(p, { temperatureK: 298.15 }).steps[0]!.kForward!;
+    const fromK = rtJoules(298.15) * Math.log(kbtOverH(298.15) / k);
+    expect(result?.barrierJ).toBeCloseTo(fromK, 6);
+    expect(result?.barrierJ).toBeCloseTo(kcal(12.2), 6);
+    expect(result).toMatchObject({ tsRaised: true, ts: { id: 'TS' } });
+  });
+
+  it('a TS below the preceding minimum gives a zero barrier, never a negative one', () => {
+    // Old code: −1.0 kcal/mol and a half-life shorter than h/k_BT.
+    const { result } = effectiveBarrier(pathway([['A', 'min', 0], ['TS', 'ts', -1], ['B', 'min', -5]]));
+    expect(result?.barrierJ).toBe(0);
+    expect(result?.tsRaised).toBe(true);
+  });
+});

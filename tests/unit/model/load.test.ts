@@ -51,7 +51,7 @@ describe('parseDocument', () => {
   });
 
   it('refuses a document from a newer format version with a clear message', () => {
-    expect(errorsOf({ format: 'passline', version: FORMAT_VERSION + 1 })).toMatch(/format version 3, written by a newer Passline; this one reads versions up to 2/);
+    expect(errorsOf({ format: 'passline', version: FORMAT_VERSION + 1 })).toMatch(/format version 4, written by a newer Passline; this one reads versions up to 3/);
   });
 
   it('refuses text that is not JSON or not a Passline document', () => {

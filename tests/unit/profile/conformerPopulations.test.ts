@@ -34,13 +34,23 @@ describe('conformerPopulations', () => {
     expect(result.rescaled).toBe(false);
   });
 
-  it('weights by E when the document resolves E: 0.0, 0.5, 1.2 kcal/mol give REFERENCE.md §8 populations', () => {
+  it('weights by G even when the document resolves H or E: G = 0.0, 0.5, 1.2 kcal/mol give REFERENCE.md §8 populations', () => {
     // REFERENCE.md §8 (Boltzmann distribution, McQuarrie, Statistical Mechanics (1976)):
-    // populations 0.6402155195, 0.2753110573, 0.08447342317 at 298.15 K. The G corrections
-    // would reorder them, so this also shows the E basis is the one used.
-    const s = speciesWith([0, 0.5, 1.2].map((kcal, i) => ({ electronic: -300 + hartree(kcal), gCorrection: 0.01 * (3 - i) })));
+    // populations 0.6402155195, 0.2753110573, 0.08447342317 at 298.15 K. The H values run the
+    // other way, so this shows the G basis is the one used (the old code weighted by H).
+    const s = speciesWith([0, 0.5, 1.2].map((kcal, i) => ({ electronic: -300, hCorrection: hartree(2 - i), gCorrection: hartree(kcal) })));
+    for (const quantity of ['H', 'E'] as const) {
+      const result = conformerPopulations(s, { quantity, temperatureK: 298.15 });
+      expect(result.ok && result.basis).toBe('G');
+      if (!result.ok) return;
+      [0.6402155195, 0.2753110573, 0.08447342317].forEach((p, i) => expect(result.populations[i]).toBeCloseTo(p, 8));
+    }
+  });
+
+  it('falls back to exp(−E/RT) weights only when a conformer has no G correction', () => {
+    const s = speciesWith([0, 0.5, 1.2].map((kcal) => ({ electronic: -300 + hartree(kcal) })));
     const result = conformerPopulations(s, { quantity: 'E', temperatureK: 298.15 });
-    expect(result.ok && result.quantity).toBe('E');
+    expect(result.ok && result.basis).toBe('E');
     if (!result.ok) return;
     [0.6402155195, 0.2753110573, 0.08447342317].forEach((p, i) => expect(result.populations[i]).toBeCloseTo(p, 8));
   });

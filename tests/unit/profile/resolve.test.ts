@@ -31,9 +31,20 @@ describe('typed and stepwise entry', () => {
     expect(profile.findings).toEqual([]);
   });
 
-  it('makes every pathway relative to its first point', () => {
+  it('shows typed values as typed under the default document-wide zero', () => {
+    // Old code re-zeroed every pathway to its first point: 5, 25, 1 came out as 0, 20, −4.
     const profile = resolveProfile(onePathway([typed('R', 'min', 5), typed('T', 'ts', 25), typed('P', 'min', 1)]));
+    expect(energies(profile)).toEqual([5, 25, 1]);
+    expect(profile.reference?.kind).toBe('zero');
+  });
+
+  it('keeps a format-2 document\'s meaning: each pathway from its own first point, said in a finding', () => {
+    const doc = parseDocument(JSON.stringify({ format: 'passline', version: 2, pathways: [{ id: 'a', name: 'A', points: [typed('R', 'min', 5), typed('T', 'ts', 25), typed('P', 'min', 1)] }] }));
+    if (!doc.ok) throw new Error('bad doc');
+    expect(doc.doc.settings.reference).toEqual({ kind: 'first' });
+    const profile = resolveProfile(doc.doc);
     expect(energies(profile)).toEqual([0, 20, -4]);
+    expect(codes(profile)).toContain('first-point-rezeroed');
   });
 
   it('uses a shared reference point across pathways when chosen', () => {
@@ -55,7 +66,7 @@ describe('typed and stepwise entry', () => {
     fc.assert(fc.property(fc.array(fc.double({ min: -50, max: 50, noNaN: true }), { minLength: 3, maxLength: 9 }), fc.double({ min: -1e4, max: 1e4, noNaN: true }), (values, shift) => {
       const build = (offset: number) => onePathway(values.map((v, i) => typed(`p${i}`, i % 2 ? 'ts' : 'min', v + offset)));
       const a = energies(resolveProfile(build(0))), b = energies(resolveProfile(build(shift)));
-      return a.every((v, i) => Math.abs(v! - b[i]!) < 1e-7);
+      return a.every((v, i) => Math.abs((v! - a[0]!) - (b[i]! - b[0]!)) < 1e-7);
     }));
   });
 });
@@ -118,7 +129,26 @@ describe('species sums', () => {
     });
     const profile = resolveProfile(doc);
     close(energies(profile)[1], -0.264218906313, 1e-8);
-    expect(profile.pathways[0]!.points[1]!.provenance.detail).toContain('3 conformers, populations 64.0% / 27.5% / 8.4%');
+    expect(profile.pathways[0]!.points[1]!.provenance.detail).toContain('3 conformers, populations from G 64.0% / 27.5% / 8.4%');
+  });
+
+  it('with quantity H the ensemble enthalpy is Σ pᵢ(G) Hᵢ, populations from G (REFERENCE.md §8 populations)', () => {
+    // G = 0.0, 0.5, 1.2 kcal/mol → p = 0.6402155195, 0.2753110573, 0.08447342317 (REFERENCE.md §8);
+    // H = 3.0, 1.0, 0.0 kcal/mol → Σ pᵢ Hᵢ computed here by hand from those populations.
+    const conformers = [[3, 0], [1, 0.5], [0, 1.2]].map(([h, g]) => ({ electronic: kcalToHartree(-500), hCorrection: kcalToHartree(h!), gCorrection: kcalToHartree(g!) }));
+    const doc = onePathway([state('ref', 'min', [['X', 1]]), state('ens', 'min', [['Y', 1]])], {
+      settings: { quantity: 'H' },
+      species: [species('X', -500), { id: 'Y', label: 'Y', structures: conformers }],
+    });
+    const profile = resolveProfile(doc);
+    close(energies(profile)[1], 3 * 0.6402155195 + 1 * 0.2753110573, 1e-8);
+    expect(profile.pathways[0]!.points[1]!.provenance.detail).toContain('populations from G');
+    expect(codes(profile)).not.toContain('conformer-weights-not-g');
+    const noG = onePathway([state('ref', 'min', [['X', 1]]), state('ens', 'min', [['Y', 1]])], {
+      settings: { quantity: 'H' },
+      species: [species('X', -500), { id: 'Y', label: 'Y', structures: conformers.map(({ gCorrection: _g, ...c }) => c) }],
+    });
+    expect(codes(resolveProfile(noG))).toContain('conformer-weights-not-g');
   });
 
   it('rescales G to another temperature as H − T·S and flags the approximation', () => {
@@ -196,8 +226,9 @@ describe('Hess route', () => {
     { id: 'P', label: 'CO2 + H2', kind: 'min', energy: { mode: 'formation', terms: terms('CO2', 'H2') } },
   ], { settings: { quantity, unit: 'kJ/mol' }, species: janaf });
 
-  it('gives ΔrG° = −28.644 and ΔrH° = −41.169 kJ/mol for CO + H2O → CO2 + H2', () => {
-    expect(resolveProfile(shift('G')).pathways[0]!.points[1]!.energyJ! / 1000).toBeCloseTo(-28.644, 3);
+  it('gives ΔrG° = ΔrH° − TΔrS° = −28.6431222 and ΔrH° = −41.169 kJ/mol for CO + H2O → CO2 + H2', () => {
+    // REFERENCE.md §4 R3: the ΔrH° − TΔrS° column (ΣνΔfG° = −28.644 differs by table rounding only).
+    expect(resolveProfile(shift('G')).pathways[0]!.points[1]!.energyJ! / 1000).toBeCloseTo(-28.6431222, 6);
     expect(resolveProfile(shift('H')).pathways[0]!.points[1]!.energyJ! / 1000).toBeCloseTo(-41.169, 3);
     expect(resolveProfile(shift('G')).findings).toEqual([]);
   });
@@ -209,7 +240,7 @@ describe('Hess route', () => {
       { id: 'P', label: 'CO2 + H2', kind: 'min', energy: { mode: 'formation', terms: terms('CO2', 'H2') } },
     ], { settings: { unit: 'kJ/mol' }, species: janaf });
     const profile = resolveProfile(doc);
-    expect(profile.pathways[0]!.points[2]!.energyJ! / 1000).toBeCloseTo(-28.644, 3); // NIST-JANAF ΔrG° of R3
+    expect(profile.pathways[0]!.points[2]!.energyJ! / 1000).toBeCloseTo(-28.6431222, 6); // NIST-JANAF ΔrH° − TΔrS° of R3
     expect(profile.pathways[0]!.points[2]!.provenance.route).toBe('formation');
     expect(profile.findings).toEqual([]);
   });

@@ -19,31 +19,38 @@ function failure(table: string, reaction: string, t = 298.15): string {
 }
 
 describe('thermoReport at 298.15 K (NIST-JANAF, REFERENCE.md §4)', () => {
-  it('R2: numbers in kJ/mol and J/(mol K), K from ΣνΔfG° = 542936.059986', () => {
+  it('R2: numbers in kJ/mol and J/(mol K), K from ΔrH° − TΔrS° = 542539.092802 (REFERENCE.md §9), ΣνΔfG° K = 542936.059986 beside it', () => {
     const r = report(JANAF_CSV, R2, 298.15);
-    expect(Object.keys(r).sort()).toEqual(['K', 'crossoverK', 'dG', 'dGfromFormation', 'dH', 'dS', 'temperatureK', 'warnings']);
+    expect(Object.keys(r).sort()).toEqual(['K', 'KBasis', 'KfromFormation', 'crossoverK', 'dG', 'dGfromFormation', 'dH', 'dS', 'temperatureK', 'warnings']);
+    expect(r.KBasis).toBe('dH-TdS');
+    expect(rel(r.K ?? NaN, 542539.092802)).toBeLessThan(1e-9);
+    expect(rel(r.KfromFormation ?? NaN, 542936.059986)).toBeLessThan(1e-9);
+    // K = exp(−dG/RT) with the reported dG (the old K did not satisfy this).
+    expect(rel(r.K!, Math.exp(-r.dG! * 1000 / (GAS_CONSTANT * 298.15)))).toBeLessThan(1e-12);
     expect(r.temperatureK).toBe(298.15);
     expect(r.dH).toBeCloseTo(-91.796, 9);
     expect(r.dS).toBeCloseTo(-198.101, 9);
     expect(r.dG).toBeCloseTo(-32.73218685, 8);
     expect(r.dGfromFormation).toBeCloseTo(-32.734, 9);
-    expect(rel(r.K ?? NaN, 542936.059986)).toBeLessThan(1e-9);
     expect(rel(r.crossoverK ?? NaN, 463.3797911)).toBeLessThan(1e-9);
     expect(r.warnings.some((w) => w.includes('formal only'))).toBe(true);
     expect(r.warnings.some((w) => w.includes('approximation'))).toBe(false);
   });
 
-  it('R1: K = 1.95166899547e+143, T* = 3666 K formal only, and the exotherm caution', () => {
+  it('R1: K from ΔrG° = −817.9032725 kJ/mol, T* = 3666 K formal only, and the exotherm caution', () => {
     const r = report(JANAF_CSV, R1, 298.15);
-    expect(rel(r.K ?? NaN, 1.95166899547e143)).toBeLessThan(1e-9);
+    // REFERENCE.md §4 R1: ΔrH° − TΔrS° = −817.9032725 kJ/mol; ΣνΔfG° gives K = 1.95166899547e+143.
+    expect(rel(r.K ?? NaN, Math.exp(817903.2725 / (GAS_CONSTANT * 298.15)))).toBeLessThan(1e-9);
+    expect(rel(r.KfromFormation ?? NaN, 1.95166899547e143)).toBeLessThan(1e-9);
     expect(rel(r.crossoverK ?? NaN, 3666.086061)).toBeLessThan(1e-9);
     expect(r.warnings.join('\n')).toMatch(/3666\.1 K is formal only/);
     expect(r.warnings.join('\n')).toContain('not a process-safety assessment');
   });
 
-  it('R3: K = 104282.560928 and no disagreement warning (routes agree to table rounding)', () => {
+  it('R3: ΣνΔfG° K = 104282.560928 beside K from ΔrH° − TΔrS° and no disagreement warning (routes agree to table rounding)', () => {
     const r = report(JANAF_CSV, R3, 298.15);
-    expect(rel(r.K ?? NaN, 104282.560928)).toBeLessThan(1e-9);
+    expect(rel(r.KfromFormation ?? NaN, 104282.560928)).toBeLessThan(1e-9);
+    expect(rel(r.K ?? NaN, Math.exp(28643.1222 / (GAS_CONSTANT * 298.15)))).toBeLessThan(1e-9);
     expect(r.warnings.some((w) => w.includes('routes'))).toBe(false);
   });
 
@@ -51,6 +58,7 @@ describe('thermoReport at 298.15 K (NIST-JANAF, REFERENCE.md §4)', () => {
     const r = report('species,dfG [kJ/mol]\nN2(g),0\nH2(g),0\nNH3(g),-16.367', R2, 298.15);
     expect(r.dH).toBeNull();
     expect(r.dG).toBeNull();
+    expect(r.KBasis).toBe('dfG');
     expect(rel(r.K ?? NaN, 542936.059986)).toBeLessThan(1e-9);
     expect(r.crossoverK).toBeNull();
     expect(r.warnings.join('\n')).toContain('the table has no ΔfH° (kJ/mol) column');
@@ -59,6 +67,16 @@ describe('thermoReport at 298.15 K (NIST-JANAF, REFERENCE.md §4)', () => {
   it('warns when the two ΔrG° routes disagree beyond 0.01 kJ/mol', () => {
     const r = report(JANAF_CSV.replace('NH3(g),-45.898,192.774,-16.367', 'NH3(g),-45.898,192.774,-16.0'), R2, 298.15);
     expect(r.warnings.join('\n')).toContain('differ by');
+  });
+});
+
+describe('thermoReport K(T) is continuous across 298.15 K', () => {
+  it('K(298.15) and K(298.16) differ as van \'t Hoff says, not by the 7e-4 step between the two ΔrG° routes', () => {
+    const a = report(JANAF_CSV, R2, 298.15), b = report(JANAF_CSV, R2, 298.16);
+    // van 't Hoff (REFERENCE.md §9): ln(K2/K1) = −(ΔrH°/R)(1/T2 − 1/T1) with ΔrH° = −91.796 kJ/mol.
+    const expected = Math.exp((91796 / GAS_CONSTANT) * (1 / 298.16 - 1 / 298.15));
+    expect(rel(b.K! / a.K!, expected)).toBeLessThan(1e-9);
+    expect(a.KBasis).toBe(b.KBasis);
   });
 });
 

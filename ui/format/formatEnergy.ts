@@ -30,6 +30,12 @@ export function formatEnergy(energyJ: number | null, unit: Unit, decimals: numbe
   return formatFixed(energyJ === null ? null : fromJoulesPerMol(energyJ, unit), decimals);
 }
 
+/** A relative energy with its sign always written ("+31.8", "−9.6"); "—" when unresolved. */
+export function formatSignedEnergy(energyJ: number | null, unit: Unit, decimals: number): string {
+  const text = formatEnergy(energyJ, unit, decimals);
+  return energyJ === null || text.startsWith('−') || text === '—' ? text : `+${text}`;
+}
+
 /** Column or axis title in quantity-calculus form, e.g. "ΔG / kcal mol⁻¹". */
 export function energyHeading(quantity: Quantity, unit: Unit): string {
   return `Δ${quantity} / ${unitLabel(unit)}`;

@@ -75,7 +75,11 @@ function fasterThanDiffusion({ pathway, steps }: PathwayAnalysis): Finding[] {
  * the comparisons the document asks for.
  */
 export function analyseDocument(doc: Document): DocumentAnalysis {
-  const profile = resolveProfile(doc);
+  return analyseResolved(doc, resolveProfile(doc));
+}
+
+/** The analysis of `doc` from a profile already resolved from it (e.g. with unresolved inputs marked). */
+export function analyseResolved(doc: Document, profile: ResolvedProfile): DocumentAnalysis {
   const extra: Finding[] = [];
   const options = { temperatureK: profile.temperatureK, transmission: doc.settings.transmission };
   const pathways = profile.pathways.map((pathway, i): PathwayAnalysis => {

@@ -17,6 +17,7 @@ export function annotationProblem(doc: Document, a: Annotation): string | null {
   const pathway = doc.pathways.find((p) => p.id === a.pathway);
   if (!pathway) return `no pathway with id "${a.pathway}"`;
   if (a.type === 'span') return pathway.cycle ? null : `pathway "${pathway.name || pathway.id}" is not marked as a catalytic cycle`;
+  if (pathway.points.length < 2) return `pathway "${pathway.name || pathway.id}" needs two points for a barrier arrow`;
   const ids = pathway.points.map((p) => p.id);
   for (const id of [a.from, a.to]) if (!ids.includes(id)) return `pathway "${pathway.name || pathway.id}" has no point "${id}"`;
   return a.from === a.to ? 'a barrier arrow needs two different points' : null;

@@ -1,7 +1,7 @@
 import type { ResolvedProfile } from '../../core/profile/types.ts';
 import type { Unit } from '../../core/model/schema.ts';
 import { unitLabel } from '../../core/units/energy.ts';
-import { formatEnergy, KIND_NAMES } from '../format/formatEnergy.ts';
+import { formatEnergy, formatSignedEnergy, KIND_NAMES } from '../format/formatEnergy.ts';
 
 /** What hovering a level tells: name and kind, energy with unit, where it came from, the way to the next point. */
 export interface PointSummary {
@@ -19,7 +19,7 @@ export function pointSummary(profile: ResolvedProfile, pathwayId: string, pointI
   const point = pathway.points[index]!;
   const after = pathway.points[index + 1];
   const u = unitLabel(unit);
-  const signed = (j: number) => { const t = formatEnergy(j, unit, decimals); return t.startsWith('-') ? `−${t.slice(1)}` : `+${t}`; };
+  const signed = (j: number) => formatSignedEnergy(j, unit, decimals);
   let next: string | null = null;
   if (after && point.energyJ !== null && after.energyJ !== null) {
     const gap = after.energyJ - point.energyJ;
@@ -28,7 +28,7 @@ export function pointSummary(profile: ResolvedProfile, pathwayId: string, pointI
       : `to ${after.label}: ${signed(gap)} ${u}`;
   }
   return {
-    title: `${point.label || point.id} (${KIND_NAMES[point.kind]}, ${pathway.name})`,
+    title: `${point.label.trim() || `unlabelled point ${index + 1}`} (${KIND_NAMES[point.kind]}, ${pathway.name})`,
     energy: point.energyJ === null ? 'no energy' : `${profile.quantity === 'E' ? 'ΔE' : `Δ${profile.quantity}`} = ${formatEnergy(point.energyJ, unit, decimals)} ${u}`,
     provenance: point.provenance.detail,
     next,

@@ -1,14 +1,10 @@
 import type { DocumentAnalysis } from '../../core/analysis/analyseDocument.ts';
 import type { Unit } from '../../core/model/schema.ts';
 import { unitLabel } from '../../core/units/energy.ts';
-import { formatEnergy } from '../format/formatEnergy.ts';
+import { formatSignedEnergy } from '../format/formatEnergy.ts';
 import { formatScientific } from '../format/formatNumber.ts';
 
-const signed = (j: number | null, unit: Unit, decimals: number) => {
-  if (j === null) return '—';
-  const t = formatEnergy(j, unit, decimals);
-  return t.startsWith('-') ? `−${t.slice(1)}` : `+${t}`;
-};
+const signed = formatSignedEnergy;
 
 /**
  * What picking a connector tells: the kinetic step it belongs to (minimum → TS → minimum,

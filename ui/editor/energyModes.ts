@@ -1,6 +1,6 @@
 import type { Document, EnergySpec, Estimate, SpeciesTerm } from '../../core/model/schema.ts';
 import type { ResolvedPathway } from '../../core/profile/types.ts';
-import { fromJoulesPerMol } from '../../core/units/energy.ts';
+import { convertEnergy, fromJoulesPerMol, type EnergyUnit } from '../../core/units/energy.ts';
 
 export type EnergyMode = EnergySpec['mode'];
 
@@ -57,8 +57,8 @@ export function termsText(terms: readonly SpeciesTerm[]): string {
   return terms.map((t) => (t.count === 1 ? t.species : `${t.count} ${t.species}`)).join(' + ');
 }
 
-/** Reads "2 cat + sub" against the known species ids; a message names the first bad part. */
-export function readTerms(text: string, ids: readonly string[]): SpeciesTerm[] | string {
+/** Reads "2 cat + sub" against the known species ids (labels, in the same order, for hints); a message names the first bad part. */
+export function readTerms(text: string, ids: readonly string[], labels?: readonly string[]): SpeciesTerm[] | string {
   const parts = text.split('+').map((p) => p.trim()).filter((p) => p !== '');
   if (parts.length === 0) return 'expected at least one species, e.g. "2 cat + sub"';
   const terms: SpeciesTerm[] = [];
@@ -67,9 +67,25 @@ export function readTerms(text: string, ids: readonly string[]): SpeciesTerm[] |
     if (!match) return `cannot read "${part}"; write a count then a species id, e.g. "2 cat"`;
     const count = match[1] ? Number(match[1]) : 1;
     const species = match[2]!;
-    if (!ids.includes(species)) return `no species with id "${species}" (known: ${ids.join(', ') || 'none'})`;
+    if (!ids.includes(species)) {
+      const byLabel = labels?.findIndex((l) => l === species) ?? -1;
+      if (byLabel >= 0) return `"${species}" is a label; write the species id "${ids[byLabel]}"`;
+      return `no species with id "${species}" (known: ${ids.join(', ') || 'none'})`;
+    }
     if (!(count > 0)) return `the count of ${species} must be positive`;
     terms.push({ species, count });
   }
   return terms;
 }
+
+/**
+ * `value` in `from` re-expressed in `to`, so that a changed input unit keeps the energy
+ * (80 kJ/mol becomes 19.12045889 kcal/mol, not 80 kcal/mol). Ten significant figures drop
+ * the binary noise of the conversion factor and keep the energy to 1 part in 10⁹.
+ */
+export function convertInput(value: number, from: EnergyUnit, to: EnergyUnit): number {
+  return Number(convertEnergy(value, from, to).toPrecision(10));
+}
+
+/** A typed energy in `unit` as kJ/mol, the unit of the energy bounds in core/model/bounds.ts. */
+export const inKJ = (unit: EnergyUnit) => (value: number) => convertEnergy(value, unit, 'kJ/mol');

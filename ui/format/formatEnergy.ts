@@ -15,14 +15,25 @@ export const KIND_NAMES: Record<PointKind, string> = {
 };
 
 /**
- * A relative energy (J/mol) shown in `unit` with `decimals` places; "—" when it could not
- * be resolved. Plain ASCII minus so that values pasted into a spreadsheet stay numbers.
+ * A number with `decimals` places and the typographic minus (−), the one minus sign the
+ * app shows; "—" for a value that could not be had. Trailing zeros stay (they carry the precision).
  */
-export function formatEnergy(energyJ: number | null, unit: Unit, decimals: number): string {
-  if (energyJ === null) return '—';
-  const text = fromJoulesPerMol(energyJ, unit).toFixed(decimals);
+export function formatFixed(value: number | null, decimals: number): string {
+  if (value === null || !Number.isFinite(value)) return '—';
+  const text = value.toFixed(decimals);
   // toFixed keeps the sign of tiny negatives ("-0.0"), which reads as a real value.
-  return /^-0(\.0*)?$/.test(text) ? text.slice(1) : text;
+  return /^-0(\.0*)?$/.test(text) ? text.slice(1) : text.replace('-', '−');
+}
+
+/** A relative energy (J/mol) shown in `unit` with `decimals` places; "—" when it could not be resolved. */
+export function formatEnergy(energyJ: number | null, unit: Unit, decimals: number): string {
+  return formatFixed(energyJ === null ? null : fromJoulesPerMol(energyJ, unit), decimals);
+}
+
+/** A relative energy with its sign always written ("+31.8", "−9.6"); "—" when unresolved. */
+export function formatSignedEnergy(energyJ: number | null, unit: Unit, decimals: number): string {
+  const text = formatEnergy(energyJ, unit, decimals);
+  return energyJ === null || text.startsWith('−') || text === '—' ? text : `+${text}`;
 }
 
 /** Column or axis title in quantity-calculus form, e.g. "ΔG / kcal mol⁻¹". */

@@ -1,6 +1,9 @@
 import { parseDocument, serializeDocument, type DocumentError } from '../../core/model/load.ts';
 import type { Document } from '../../core/model/schema.ts';
-import { analyseDocument, type DocumentAnalysis } from '../../core/analysis/analyseDocument.ts';
+import { analyseDocument, analyseResolved, type DocumentAnalysis } from '../../core/analysis/analyseDocument.ts';
+import { resolveProfile } from '../../core/profile/resolve.ts';
+import { markUnresolved } from '../../core/profile/checks/unresolvedInputs.ts';
+import { activeInputs, withInput, withoutInput, type HeldInput, type InputPlace } from './heldInputs.ts';
 import type { ResolvedProfile } from '../../core/profile/types.ts';
 import { closeGroup, record, redo, startHistory, undo, type History, type RecordOptions } from '../../core/edit/history.ts';
 import { DOCUMENT_EXTENSION, type ExportRequest, type HostApi } from '../host/hostApi.ts';
@@ -41,6 +44,10 @@ export class DocumentStore {
   /** The document resolved by core: energies in J/mol with provenance, and findings. */
   readonly profile: ResolvedProfile;
   readonly dirty: boolean;
+  /** Entries typed in the editor that did not resolve; each stays on its field until fixed or until its data changes. */
+  held: readonly HeldInput[] = $state.raw([]);
+  /** The held entries that still apply to the document shown (undo or a drag may have replaced their data). */
+  readonly unresolved: readonly HeldInput[];
   readonly #host: HostApi;
 
   constructor(host: HostApi, initial: Document, fileName: string) {
@@ -49,7 +56,9 @@ export class DocumentStore {
     this.saved = $state.raw<Document | null>(initial);
     this.fileName = $state(fileName);
     this.doc = $derived(this.history.present);
-    this.analysis = $derived(analyseDocument(this.doc));
+    this.unresolved = $derived(activeInputs(this.doc, this.held));
+    this.analysis = $derived(this.unresolved.length === 0 ? analyseDocument(this.doc)
+      : analyseResolved(this.doc, markUnresolved(this.doc, resolveProfile(this.doc), this.unresolved)));
     this.profile = $derived(this.analysis.profile);
     this.dirty = $derived(this.doc !== this.saved);
   }
@@ -59,6 +68,22 @@ export class DocumentStore {
     if (next === this.doc) return false;
     this.history = record(this.history, next, options);
     return true;
+  }
+
+  /** Keeps what was typed at `place` that does not resolve, with why; the document keeps its last valid value. */
+  holdInput(place: InputPlace, text: string, message: string): void {
+    this.held = withInput(this.doc, this.held, place, text, message);
+  }
+
+  /** Forgets the entry held at `place` (it was fixed, or the field accepted a value). */
+  releaseInput(place: InputPlace): void {
+    const next = withoutInput(this.held, place);
+    if (next !== this.held) this.held = next;
+  }
+
+  /** The entry held at `place`, while it still applies. */
+  heldAt(place: InputPlace): HeldInput | undefined {
+    return this.unresolved.find((h) => h.pathway === place.pathway && h.point === place.point && h.field === place.field);
   }
 
   /** Ends a drag or typing burst, so the next edit is its own undo step. */
@@ -84,6 +109,7 @@ export class DocumentStore {
   /** Starts over with `doc` (a new or opened document): fresh history, nothing unsaved unless `unsaved` (a restored working copy). */
   replace(doc: Document, fileName: string, filePath?: string, unsaved = false): void {
     this.history = startHistory(doc);
+    this.held = [];
     this.saved = unsaved ? null : doc;
     this.fileName = fileName;
     this.filePath = filePath;

@@ -9,9 +9,10 @@ import { checkSharedStates } from './sharedStates.ts';
 import { checkCycleClosure } from './cycleClosure.ts';
 import { checkHessMismatch } from './hessMismatch.ts';
 import { checkExothermCaution } from './exothermCaution.ts';
+import { checkEmptyLabels } from './emptyLabels.ts';
 
 const CHECKS: readonly ((input: CheckInput) => Finding[])[] = [
-  checkTransitionStates, checkDuplicateLabels, checkMassBalance, checkSharedStates, checkCycleClosure, checkHessMismatch, checkExothermCaution,
+  checkTransitionStates, checkDuplicateLabels, checkMassBalance, checkSharedStates, checkCycleClosure, checkHessMismatch, checkExothermCaution, checkEmptyLabels,
 ];
 
 /** Runs every consistency check on resolved pathways. */

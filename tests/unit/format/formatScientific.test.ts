@@ -17,4 +17,11 @@ describe('formatScientific', () => {
     expect(formatScientific(null)).toBe('—');
     expect(formatScientific(Number.NaN)).toBe('—');
   });
+
+  it('keeps significant trailing zeros and the true minus in the middle range', () => {
+    expect(formatScientific(0.06)).toBe('0.0600');
+    expect(formatScientific(2)).toBe('2.00');
+    expect(formatScientific(-4.5)).toBe('−4.50');
+    expect(formatScientific(1234.5)).toBe('1230');
+  });
 });

@@ -11,7 +11,7 @@ describe('AnalysisPanel', () => {
     // Δ‡G 20 kcal/mol at 298.15 K, κ = 1, first order: k = 0.0135881500479 s⁻¹, t½ = 51.0111514899 s
     // (REFERENCE.md §2, Eyring J. Chem. Phys. 3, 107 (1935)); reverse barrier 20 − (−5) = 25.
     expect(cells.slice(0, 5)).toEqual(['20.0', '25.0', '−5.0', '0.0136 s⁻¹', '2.94 × 10⁻⁶ s⁻¹']);
-    expect(cells[6]).toBe('51 s');
+    expect(cells[6]).toBe('51.0 s');
   });
 
   it('names the effective barrier with its TS and intermediate, in the display unit', () => {

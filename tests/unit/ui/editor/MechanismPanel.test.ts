@@ -13,7 +13,7 @@ describe('MechanismPanel', () => {
     const table = screen.getByRole('table', { name: 'Route' });
     expect(within(table).getByRole('columnheader', { name: 'ΔG / kcal mol⁻¹' })).toBeTruthy();
     expect(energyCell('TS')).toBe('20.0');
-    expect(energyCell('B')).toBe('-5.0');
+    expect(energyCell('B')).toBe('−5.0');
   });
 
   it('typing a barrier re-resolves the point; a non-number is refused in place', async () => {

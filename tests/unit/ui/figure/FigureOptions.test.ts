@@ -22,7 +22,7 @@ describe('FigureOptions', () => {
     const field = screen.getByRole('textbox', { name: 'Font size' });
     await fireEvent.focus(field);
     await fireEvent.input(field, { target: { value: '0' } });
-    expect(screen.getByRole('alert').textContent).toBe('expected a positive number');
+    expect(screen.getByRole('alert').textContent).toBe('font size 0 pt is outside 2 to 72 pt');
     expect(store.doc.figure.fontSizePt).toBe(8);
   });
 });

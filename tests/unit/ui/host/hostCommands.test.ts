@@ -27,21 +27,25 @@ describe('onHostCommand on the desktop', () => {
     expect(seen).toEqual([{ kind: 'export', format: 'svg' }]);
   });
 
-  it('gives the menu\'s undo to a focused text field instead of the document', () => {
+  it('sends the menu\'s undo to the document even from a focused text field, which commits first', () => {
     const { emit } = exposeSource();
     const input = document.createElement('input');
     document.body.append(input);
     input.focus();
-    const execCommand = vi.fn(() => true);
-    Object.defineProperty(document, 'execCommand', { value: execCommand, configurable: true });
+    const seen: unknown[] = [];
+    onHostCommand((command) => seen.push([command, document.activeElement === input]));
+    emit({ kind: 'undo' });
+    expect(seen).toEqual([[{ kind: 'undo' }, false]]);
+  });
+
+  it('keeps a field\'s own text undo from running, without a second document undo', () => {
+    exposeSource();
     const seen: unknown[] = [];
     onHostCommand((command) => seen.push(command));
-    emit({ kind: 'undo' });
-    expect(execCommand).toHaveBeenCalledWith('undo');
+    const event = new InputEvent('beforeinput', { inputType: 'historyUndo', cancelable: true, bubbles: true });
+    document.body.dispatchEvent(event);
+    expect(event.defaultPrevented).toBe(true);
     expect(seen).toEqual([]);
-    input.blur();
-    emit({ kind: 'undo' });
-    expect(seen).toEqual([{ kind: 'undo' }]);
   });
 });
 
@@ -59,13 +63,25 @@ describe('onHostCommand in a browser', () => {
     expect(seen).toHaveLength(1);
   });
 
-  it('leaves Ctrl+Z in a text field to the field', () => {
+  it('gives Ctrl+Z in a text field to the document, not to the field', () => {
     const seen: unknown[] = [];
     onHostCommand((command) => seen.push(command));
     const input = document.createElement('textarea');
     document.body.append(input);
-    input.dispatchEvent(new KeyboardEvent('keydown', { key: 'z', ctrlKey: true, bubbles: true }));
-    window.dispatchEvent(new KeyboardEvent('keydown', { key: 'z', ctrlKey: true }));
+    input.focus();
+    const event = new KeyboardEvent('keydown', { key: 'z', ctrlKey: true, bubbles: true, cancelable: true });
+    input.dispatchEvent(event);
+    expect(event.defaultPrevented).toBe(true);
+    expect(document.activeElement).not.toBe(input);
     expect(seen).toEqual([{ kind: 'undo' }]);
+  });
+
+  it('turns a text field\'s own undo (context menu) into the document\'s', () => {
+    const seen: unknown[] = [];
+    onHostCommand((command) => seen.push(command));
+    const event = new InputEvent('beforeinput', { inputType: 'historyRedo', cancelable: true, bubbles: true });
+    document.body.dispatchEvent(event);
+    expect(event.defaultPrevented).toBe(true);
+    expect(seen).toEqual([{ kind: 'redo' }]);
   });
 });

@@ -27,7 +27,7 @@ describe('number formatting', () => {
   });
 
   it('durations in the unit a person reads (1 d = 86 400 s, 1 yr = 365.25 d, Julian year, IAU)', () => {
-    expect(formatDuration(51.0111514899)).toBe('51 s');
+    expect(formatDuration(51.0111514899)).toBe('51.0 s');
     expect(formatDuration(8066.41175461)).toBe('2.24 h');
     expect(formatDuration(235879.696519)).toBe('2.73 d');
     expect(formatDuration(365.25 * 86400 * 721)).toBe('721 yr');

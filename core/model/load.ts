@@ -2,6 +2,7 @@ import type { z } from 'zod';
 import { Document, describe, FORMAT_VERSION, type DocumentInput } from './schema.ts';
 import { migrate } from './migrate.ts';
 import { referenceProblems } from './references.ts';
+import { documentLimits } from './documentLimits.ts';
 
 /** One problem in a document, with the field path in `pathways[1].points[3].energy` form. */
 export interface DocumentError {
@@ -65,7 +66,7 @@ export function validateDocument(raw: unknown): LoadResult {
     }));
     return { ok: false, errors };
   }
-  const problems = referenceProblems(parsed.data);
+  const problems = [...documentLimits(parsed.data), ...referenceProblems(parsed.data)];
   if (problems.length > 0) return { ok: false, errors: problems.slice(0, MAX_ERRORS) };
   return migrated.migratedFrom ? { ok: true, doc: parsed.data, migratedFrom: migrated.migratedFrom } : { ok: true, doc: parsed.data };
 }

@@ -63,7 +63,9 @@ export const BOUNDS = {
   /** Characters in one label, name or annotation text. */
   textLength: bound('text length', 'characters', [0, 1_000], [0, 80]),
   /** Output rows of a simulation (`simulate --points`). */
-  simulationPoints: bound('number of output times', '', [2, 100_000], [10, 1_000]),
+  simulationPoints: bound('number of output times', '', [2, 10_000], [10, 1_000]),
+  /** States (species) in one microkinetic simulation: the stiff solver's work grows with their number. */
+  simulationStates: bound('number of states in a simulation', '', [1, 100], [1, 30]),
   /** Temperatures in a scan (`scan --count`). */
   scanCount: bound('number of temperatures', '', [1, 1_000], [2, 100]),
 } as const satisfies Record<string, Bound>;

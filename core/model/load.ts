@@ -57,7 +57,10 @@ function messageFor(issue: z.core.$ZodIssue, root: unknown): string {
 /** Validates an already-parsed JSON value (after migration). */
 export function validateDocument(raw: unknown): LoadResult {
   const migrated = migrate(raw);
-  if (!migrated.ok) return { ok: false, errors: [{ path: migrated.message.split(':')[0] ?? '', message: migrated.message.replace(/^[^:]*:\s*/, '') }] };
+  if (!migrated.ok) {
+    const field = /^(\w+): /.exec(migrated.message);
+    return { ok: false, errors: [field ? { path: field[1]!, message: migrated.message.slice(field[0].length) } : { path: '(document)', message: migrated.message }] };
+  }
   const parsed = Document.safeParse(migrated.doc);
   if (!parsed.success) {
     const errors = parsed.error.issues.slice(0, MAX_ERRORS).map((issue) => ({

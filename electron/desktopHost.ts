@@ -4,6 +4,7 @@ import { basename, resolve } from 'node:path';
 import { DOCUMENT_EXTENSION, EXPORT_TYPES, type AutosaveSnapshot, type CloseReply, type HostWire, type OpenedFile, type SaveRequest } from '../ui/host/hostApi.ts';
 import { atomicWrite } from '../core/io/atomicWrite.node.ts';
 import { sweepStaleTemps } from '../core/io/sweepStaleTemps.node.ts';
+import { FileLockedError } from '../core/io/withFileLock.node.ts';
 import { diskState, fingerprintOf, type FileFingerprint } from './fileFingerprint.ts';
 import { documentFilter, exportFilter, withExtension } from './fileFilters.ts';
 import type { Logger } from './hardenContents.ts';
@@ -101,7 +102,7 @@ export function createDesktopHost(deps: DesktopHostDeps) {
         await saveWithBackup(path, request.text);
         await remember(path, fingerprintOf(request.text, (await stat(path)).mtimeMs));
       } catch (error) {
-        throw fileError('write', path, error);
+        throw error instanceof FileLockedError ? error : fileError('write', path, error);
       }
       return { name: basename(path), path };
     },

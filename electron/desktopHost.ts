@@ -4,10 +4,12 @@ import { basename, resolve } from 'node:path';
 import { DOCUMENT_EXTENSION, EXPORT_TYPES, type AutosaveSnapshot, type CloseReply, type HostWire, type OpenedFile, type SaveRequest } from '../ui/host/hostApi.ts';
 import { atomicWrite } from '../core/io/atomicWrite.node.ts';
 import { sweepStaleTemps } from '../core/io/sweepStaleTemps.node.ts';
+import { FileLockedError } from '../core/io/withFileLock.node.ts';
 import { diskState, fingerprintOf, type FileFingerprint } from './fileFingerprint.ts';
 import { documentFilter, exportFilter, withExtension } from './fileFilters.ts';
 import type { Logger } from './hardenContents.ts';
 import type { PathGrants } from './pathGrants.ts';
+import type { DropRegistry } from './dropRegistry.ts';
 import { fileError, readDocumentFile } from './readDocumentFile.ts';
 import type { RecentStore } from './recentStore.ts';
 import type { RecoveryStore } from './recoveryStore.ts';
@@ -30,6 +32,8 @@ export interface DesktopDialogs {
 export interface DesktopHostDeps {
   dialogs: DesktopDialogs;
   grants: PathGrants;
+  /** Paths of files really dropped on an app window (announced by preload). */
+  drops: DropRegistry;
   recent: RecentStore;
   recovery: RecoveryStore;
   /** Receives the renderer's answer to `closeRequested`. */
@@ -46,7 +50,7 @@ export interface DesktopHostDeps {
  * arguments only after IPC validation.
  */
 export function createDesktopHost(deps: DesktopHostDeps) {
-  const { dialogs, grants, recent, recovery, log } = deps;
+  const { dialogs, grants, drops, recent, recovery, log } = deps;
   // What this session last read from or wrote to each document, to notice outside changes.
   const known = new Map<string, FileFingerprint>();
 
@@ -90,8 +94,9 @@ export function createDesktopHost(deps: DesktopHostDeps) {
       if (!grants.allows(path) && !recent.has(path)) throw new Error(`${basename(path)} was not chosen in this app; use Open… to pick it`);
       return open(path);
     },
-    // The path comes from preload's look-up of a dropped File, never from page script.
+    // Only a path announced by preload's listener for a trusted drop event, once, shortly after.
     async openDroppedFile(path: string) {
+      if (!drops.take(path)) throw new Error(`${basename(path)} was not dropped on the window; use Open… to pick it`);
       return open(path);
     },
     async saveDocument(request: SaveRequest) {
@@ -101,7 +106,7 @@ export function createDesktopHost(deps: DesktopHostDeps) {
         await saveWithBackup(path, request.text);
         await remember(path, fingerprintOf(request.text, (await stat(path)).mtimeMs));
       } catch (error) {
-        throw fileError('write', path, error);
+        throw error instanceof FileLockedError ? error : fileError('write', path, error);
       }
       return { name: basename(path), path };
     },
@@ -122,9 +127,9 @@ export function createDesktopHost(deps: DesktopHostDeps) {
     },
     async recoveryOffer() {
       const offer = await recovery.offer();
-      // The copy names the file the user was editing; saving the restored text may go back there.
-      if (offer?.path) grants.grant(offer.path);
-      return offer;
+      // The path in a working copy was written by the renderer, so it proves nothing: the
+      // text comes back as an untitled document and its first save asks where (no grant).
+      return offer && { name: offer.name, text: offer.text, savedAt: offer.savedAt };
     },
     async dismissRecovery() {
       await recovery.dismiss();

@@ -16,6 +16,7 @@ import { PathGrants } from './pathGrants.ts';
 import { RecentStore } from './recentStore.ts';
 import { RecoveryStore } from './recoveryStore.ts';
 import { registerHostIpc } from './registerHostIpc.ts';
+import { DropRegistry, DROP_CHANNEL } from './dropRegistry.ts';
 import { isAppSender } from './senderCheck.ts';
 import { acceptSystemPath } from './systemPath.ts';
 import { placeWindow } from './windowState.ts';
@@ -126,11 +127,13 @@ if (!app.requestSingleInstanceLock()) {
   });
   for (const path of documentPathsFromArgv(process.argv, launcherArgs, process.cwd())) openFromSystem(path);
 
+  const drops = new DropRegistry();
   void app.whenReady().then(async () => {
     await Promise.all([recent.load(), recovery.begin()]);
     const host = createDesktopHost({
       dialogs,
       grants,
+      drops,
       recent,
       recovery,
       onCloseReply: async (reply) => closeGuard?.onReply(reply),
@@ -138,6 +141,9 @@ if (!app.requestSingleInstanceLock()) {
       log,
     });
     registerHostIpc(ipcMain, host, (event) => isAppSender(event, appWindowIds, appUrl), log);
+    ipcMain.on(DROP_CHANNEL, (event, paths: unknown) => {
+      if (isAppSender(event, appWindowIds, appUrl)) drops.record(paths);
+    });
     setMenu();
     await ensureWindow();
     app.on('activate', () => {

@@ -1,6 +1,8 @@
 import { contextBridge, ipcRenderer, webUtils } from 'electron';
 import { COMMANDS_GLOBAL, HOST_COMMAND_CHANNEL, HOST_GLOBAL, hostChannels, type AutosaveSnapshot, type CloseReply, type ExportRequest, type HostApi, type SaveRequest } from '../ui/host/hostApi.ts';
 import { createCommandBuffer } from './commandBuffer.ts';
+import { DROP_CHANNEL } from './dropRegistry.ts';
+import { droppedPaths } from './droppedPaths.ts';
 
 // Each method forwards plain values to its channel; the renderer sees nothing else of Electron.
 const host = {
@@ -20,6 +22,13 @@ const host = {
 
 const commands = createCommandBuffer((message) => console.warn(`[passline] ${message}`));
 ipcRenderer.on(HOST_COMMAND_CHANNEL, (_event, value: unknown) => commands.receive(value));
+
+// Capture phase: the paths of a real drop reach the main process before the page's own
+// handler asks to open one; main opens only paths announced this way.
+globalThis.addEventListener?.('drop', (event) => {
+  const paths = droppedPaths(event as DragEvent, (file) => webUtils.getPathForFile(file));
+  if (paths.length > 0) ipcRenderer.send(DROP_CHANNEL, paths);
+}, true);
 
 contextBridge.exposeInMainWorld(HOST_GLOBAL, host);
 contextBridge.exposeInMainWorld(COMMANDS_GLOBAL, commands.source);

@@ -1,19 +1,30 @@
 import { analyseDocument } from '../analysis/analyseDocument.ts';
-import type { CliIo } from './io.ts';
+import { CliError, type CliIo } from './io.ts';
 import { loadInput } from './loadInput.ts';
 import { applySettingOptions } from './options.ts';
 import { analysisReport } from '../report/analysisReport.ts';
 import { analysisText } from '../report/analysisText.ts';
+import { documentFindings, findingCounts } from './documentFindings.ts';
 
 export interface AnalyzeOptions {
   json?: boolean | undefined;
   unit?: string | undefined;
   temperature?: string | undefined;
+  /** Exit 1 when any finding has severity error. */
+  strict?: boolean | undefined;
 }
 
-/** `passline analyze FILE`: resolves the profile and prints points, analysis and findings. */
+/**
+ * `passline analyze FILE`: resolves the profile and prints points, analysis and findings,
+ * ending (text form) with a summary line counting the findings by severity.
+ */
 export function runAnalyze(file: string, options: AnalyzeOptions, io: CliIo): void {
   const doc = applySettingOptions(loadInput(file, io), options);
-  const report = analysisReport(doc, analyseDocument(doc));
-  io.out(options.json ? `${JSON.stringify(report, null, 2)}\n` : analysisText(report));
+  const analysis = analyseDocument(doc);
+  const base = analysisReport(doc, analysis);
+  const report = { ...base, checks: [...base.checks, ...documentFindings(doc, analysis.profile)] };
+  const summary = `findings: ${findingCounts(report.checks)}`;
+  io.out(options.json ? `${JSON.stringify(report, null, 2)}\n` : `${analysisText(report)}\n${summary}\n`);
+  const errors = report.checks.filter((f) => f.severity === 'error').length;
+  if (options.strict && errors > 0) throw new CliError(`--strict: ${errors} finding${errors === 1 ? '' : 's'} of severity error (${summary})`);
 }

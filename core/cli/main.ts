@@ -9,12 +9,14 @@ import { runRender } from './render.ts';
 import { runScan } from './scan.ts';
 import { runReport, runTables } from './report.ts';
 import { HELP, VERSION } from './help.ts';
+import { attachNegativeValues } from './negativeValues.ts';
+import { readUtf8, terminalWriter } from './terminal.ts';
 
 /** The real terminal and filesystem. */
 export const nodeIo: CliIo = {
-  out: (text) => process.stdout.write(text),
-  err: (text) => process.stderr.write(text),
-  readFile: (path) => readFileSync(path, 'utf8'),
+  out: terminalWriter(process.stdout),
+  err: terminalWriter(process.stderr),
+  readFile: readUtf8,
   readBytes: (path) => new Uint8Array(readFileSync(path)),
   writeFile: atomicWrite,
 };
@@ -24,9 +26,9 @@ type OptionSpec = { type: 'string' | 'boolean'; multiple?: boolean; short?: stri
 
 const COMMANDS: Record<string, { options: Record<string, OptionSpec>; run: Command; args: number }> = {
   analyze: {
-    options: { json: { type: 'boolean' }, unit: { type: 'string' }, temperature: { type: 'string' } },
+    options: { json: { type: 'boolean' }, unit: { type: 'string' }, temperature: { type: 'string' }, strict: { type: 'boolean' } },
     args: 1,
-    run: ([file], v, io) => runAnalyze(file!, { json: v.json as boolean | undefined, unit: v.unit as string | undefined, temperature: v.temperature as string | undefined }, io),
+    run: ([file], v, io) => runAnalyze(file!, { json: v.json as boolean | undefined, unit: v.unit as string | undefined, temperature: v.temperature as string | undefined, strict: v.strict as boolean | undefined }, io),
   },
   thermo: {
     options: { json: { type: 'boolean' }, reaction: { type: 'string' }, temperature: { type: 'string' }, solve: { type: 'string' }, given: { type: 'string' } },
@@ -39,9 +41,9 @@ const COMMANDS: Record<string, { options: Record<string, OptionSpec>; run: Comma
     run: ([file], v, io) => runSimulate(file!, { species: v.species as boolean | undefined, until: v.until as string | undefined, points: v.points as string | undefined, init: v.init as string[] | undefined, pathway: v.pathway as string | undefined, temperature: v.temperature as string | undefined }, io),
   },
   render: {
-    options: { output: { type: 'string', short: 'o' }, 'width-mm': { type: 'string' }, preset: { type: 'string' }, theme: { type: 'string' }, dpi: { type: 'string' }, unit: { type: 'string' }, temperature: { type: 'string' } },
+    options: { output: { type: 'string', short: 'o' }, 'width-mm': { type: 'string' }, preset: { type: 'string' }, theme: { type: 'string' }, dpi: { type: 'string' }, unit: { type: 'string' }, temperature: { type: 'string' }, strict: { type: 'boolean' } },
     args: 1,
-    run: ([file], v, io) => runRender(file!, { output: v.output as string | undefined, widthMm: v['width-mm'] as string | undefined, preset: v.preset as string | undefined, theme: v.theme as string | undefined, dpi: v.dpi as string | undefined, unit: v.unit as string | undefined, temperature: v.temperature as string | undefined }, io),
+    run: ([file], v, io) => runRender(file!, { output: v.output as string | undefined, widthMm: v['width-mm'] as string | undefined, preset: v.preset as string | undefined, theme: v.theme as string | undefined, dpi: v.dpi as string | undefined, unit: v.unit as string | undefined, temperature: v.temperature as string | undefined, strict: v.strict as boolean | undefined }, io),
   },
   scan: {
     options: { from: { type: 'string' }, to: { type: 'string' }, count: { type: 'string' } },
@@ -79,7 +81,7 @@ export async function main(argv: string[], io: CliIo = nodeIo): Promise<number> 
   try {
     let parsed;
     try {
-      parsed = parseArgs({ args: rest, options: { ...command.options, help: { type: 'boolean' } }, allowPositionals: true, strict: true });
+      parsed = parseArgs({ args: attachNegativeValues(rest, command.options), options: { ...command.options, help: { type: 'boolean' } }, allowPositionals: true, strict: true });
     } catch (error) {
       throw new CliError(`${(error as Error).message.split('\n')[0]} (try passline --help)`, EXIT_USAGE);
     }

@@ -1,4 +1,5 @@
 import type { Document } from '../model/schema.ts';
+import { BOUNDS, outsideHard, type BoundName } from '../model/bounds.ts';
 import { ENERGY_UNITS, parseEnergyUnit } from '../units/energy.ts';
 import { CliError, EXIT_USAGE } from './io.ts';
 
@@ -11,17 +12,22 @@ export function applySettingOptions(doc: Document, options: { unit?: string | un
     settings = { ...settings, unit };
   }
   if (options.temperature !== undefined) {
-    const t = Number(options.temperature);
-    if (!Number.isFinite(t) || t <= 0) throw new CliError(`--temperature: expected a positive number of kelvin, got "${options.temperature}"`, EXIT_USAGE);
-    settings = { ...settings, temperatureK: t };
+    settings = { ...settings, temperatureK: boundedOption('temperature', options.temperature, 'temperatureK', settings.temperatureK) };
   }
   return settings === doc.settings ? doc : { ...doc, settings };
 }
 
-/** Parses a positive number option or fails with a usage error naming it. */
-export function positiveOption(name: string, text: string | undefined, fallback: number): number {
+/**
+ * Parses a number option inside the hard range of `BOUNDS[bound]` (the same table the
+ * document schema uses), or fails with a usage error naming the option and the bound.
+ */
+export function boundedOption(name: string, text: string | undefined, bound: BoundName, fallback: number, whole = false): number {
   if (text === undefined) return fallback;
-  const value = Number(text);
-  if (!Number.isFinite(value) || value <= 0) throw new CliError(`--${name}: expected a positive number, got "${text}"`, EXIT_USAGE);
+  const value = text.trim() === '' ? Number.NaN : Number(text);
+  const b = BOUNDS[bound];
+  if (Number.isNaN(value)) throw new CliError(`--${name}: expected a number${b.unit ? ` in ${b.unit}` : ''}, got "${text}"`, EXIT_USAGE);
+  const problem = outsideHard(bound, value);
+  if (problem) throw new CliError(`--${name}: ${problem}`, EXIT_USAGE);
+  if (whole && !Number.isInteger(value)) throw new CliError(`--${name}: expected a whole ${b.what}, got "${text}"`, EXIT_USAGE);
   return value;
 }

@@ -9,9 +9,11 @@ import type { Preset } from '../figure/presets.ts';
 import type { ThemeName } from '../figure/themes.ts';
 import { CliError, EXIT_USAGE, type CliIo } from './io.ts';
 import { loadInput } from './loadInput.ts';
-import { applySettingOptions, positiveOption } from './options.ts';
+import { applySettingOptions, boundedOption } from './options.ts';
 import { readBundledFont } from './fontFile.ts';
 import { writeOutput } from './writeOutput.ts';
+import { documentFindings } from './documentFindings.ts';
+import { missingGlyphs, missingGlyphsMessage } from '../export/missingGlyphs.ts';
 
 export interface RenderCliOptions {
   output?: string | undefined;
@@ -21,6 +23,8 @@ export interface RenderCliOptions {
   dpi?: string | undefined;
   unit?: string | undefined;
   temperature?: string | undefined;
+  /** Refuse to write when the profile has findings of severity error. */
+  strict?: boolean | undefined;
 }
 
 const PRESETS: readonly Preset[] = ['single', 'double', 'slide'];
@@ -43,17 +47,28 @@ export async function runRender(file: string, options: RenderCliOptions, io: Cli
   if (!format) throw new CliError(`-o: the output must end in .svg, .pdf or .png, got "${options.output}"`, EXIT_USAGE);
   const preset = pick('preset', options.preset, PRESETS);
   const theme = pick('theme', options.theme, THEMES);
-  const widthMm = options.widthMm === undefined ? undefined : positiveOption('width-mm', options.widthMm, 0);
-  const dpi = options.dpi === undefined ? undefined : positiveOption('dpi', options.dpi, 0);
+  const widthMm = options.widthMm === undefined ? undefined : boundedOption('width-mm', options.widthMm, 'figureMm', 0);
+  const dpi = options.dpi === undefined ? undefined : boundedOption('dpi', options.dpi, 'dpi', 0);
   const problem = checkRenderOptions({ dpi, widthMm });
   if (problem) throw new CliError(`--${problem.replace(/^width/, 'width-mm')}`, EXIT_USAGE);
   const doc = applySettingOptions(loadInput(file, io), options);
   const profile = resolveProfile(doc);
+  const findings = documentFindings(doc, profile);
+  const blank = findings.find((f) => f.code === 'no-points');
+  if (blank) throw new CliError(`${file}: ${blank.message}; nothing was written`);
+  const errors = [...profile.findings, ...findings].filter((f) => f.severity === 'error');
+  if (options.strict && errors.length > 0) {
+    throw new CliError(`--strict: ${errors.length} finding${errors.length === 1 ? '' : 's'} of severity error, first: ${errors[0]!.message}; nothing was written (see passline analyze)`);
+  }
   const fontBytes = readBundledFont();
+  const metrics = readFontMetrics(fontBytes);
   const layout = { ...(preset ? { preset } : {}), ...(theme ? { theme } : {}), ...(widthMm !== undefined ? { widthMm } : {}) };
   const data = await renderFigure(profile, doc, { format, fontBytes, ...layout, ...(dpi !== undefined ? { dpi } : {}) });
   await writeOutput(options.output, data, io);
   // renderFigure keeps its scene to itself; laying out again costs milliseconds.
-  const warning = omittedLabelsMessage(layoutFigure(profile, doc, { metrics: readFontMetrics(fontBytes), ...layout }).omittedLabels);
+  const warning = omittedLabelsMessage(layoutFigure(profile, doc, { metrics, ...layout }).omittedLabels);
   if (warning) io.err(`passline render: warning: ${warning}\n`);
+  for (const f of findings) io.err(`passline render: ${f.severity}: ${f.message}\n`);
+  const glyphs = format === 'svg' ? null : missingGlyphsMessage(missingGlyphs(doc, metrics), metrics.family, format.toUpperCase());
+  if (glyphs) io.err(`passline render: warning: ${glyphs}\n`);
 }

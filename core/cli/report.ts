@@ -9,6 +9,8 @@ import { loadInput } from './loadInput.ts';
 import { applySettingOptions } from './options.ts';
 import { readBundledFont } from './fontFile.ts';
 import { writeOutput } from './writeOutput.ts';
+import { missingGlyphs, missingGlyphsMessage } from '../export/missingGlyphs.ts';
+import { readFontMetrics } from '../figure/font/fontMetrics.ts';
 
 export interface ReportCliOptions { output?: string | undefined; unit?: string | undefined; temperature?: string | undefined }
 
@@ -22,7 +24,11 @@ function outputOf(options: ReportCliOptions, allowed: readonly string[], command
 export async function runReport(file: string, options: ReportCliOptions, io: CliIo): Promise<void> {
   const output = outputOf(options, ['.pdf'], 'report');
   const doc = applySettingOptions(loadInput(file, io), options);
-  await writeOutput(output, await renderReport(doc, { fontBytes: readBundledFont() }), io);
+  const fontBytes = readBundledFont();
+  await writeOutput(output, await renderReport(doc, { fontBytes }), io);
+  const metrics = readFontMetrics(fontBytes);
+  const glyphs = missingGlyphsMessage(missingGlyphs(doc, metrics), metrics.family, 'report');
+  if (glyphs) io.err(`passline report: warning: ${glyphs}\n`);
 }
 
 /** `passline tables FILE -o OUT.csv|OUT.md`: the points and the analysis as tables. */

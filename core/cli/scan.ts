@@ -3,17 +3,17 @@ import { tableToCsv } from '../export/tableToCsv.ts';
 import { CliError, EXIT_USAGE, type CliIo } from './io.ts';
 import { significant } from './significant.ts';
 import { loadInput } from './loadInput.ts';
-import { positiveOption } from './options.ts';
+import { boundedOption } from './options.ts';
 
 export interface ScanCliOptions { from?: string | undefined; to?: string | undefined; count?: string | undefined }
 
 /** `passline scan FILE --from K --to K [--count N]`: k, K, TOF and selectivity vs temperature as CSV. */
 export function runScan(file: string, options: ScanCliOptions, io: CliIo): void {
   const doc = loadInput(file, io);
-  const from = positiveOption('from', options.from, 273.15);
-  const to = positiveOption('to', options.to, 373.15);
-  const count = positiveOption('count', options.count, 11);
-  if (!Number.isInteger(count) || count > 1000) throw new CliError(`--count: expected a whole number from 1 to 1000, got "${options.count}"`, EXIT_USAGE);
+  const from = boundedOption('from', options.from, 'temperatureK', 273.15);
+  const to = boundedOption('to', options.to, 'temperatureK', 373.15);
+  const count = boundedOption('count', options.count, 'scanCount', 11, true);
+  if (count === 1 && options.to !== undefined) throw new CliError('--count 1 scans only --from; give --count 2 or more to reach --to, or leave --to out', EXIT_USAGE);
   const scan = scanDocument(doc, from, to, count);
   io.out(tableToCsv({
     columns: ['T [K]', ...scan.series.map((s) => `${s.name} [${s.unit}]`)],

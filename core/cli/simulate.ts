@@ -11,7 +11,8 @@ import { tableToCsv } from '../export/tableToCsv.ts';
 import { CliError, EXIT_USAGE, type CliIo } from './io.ts';
 import { significant } from './significant.ts';
 import { loadInput } from './loadInput.ts';
-import { applySettingOptions, positiveOption } from './options.ts';
+import { applySettingOptions, boundedOption } from './options.ts';
+import { outsideHard } from '../model/bounds.ts';
 
 export interface SimulateCliOptions {
   species?: boolean | undefined;
@@ -27,8 +28,11 @@ function readInitial(pairs: readonly string[]): Map<string, number> {
   const initial = new Map<string, number>();
   for (const pair of pairs) {
     const at = pair.lastIndexOf('=');
-    const value = Number(pair.slice(at + 1));
-    if (at <= 0 || !Number.isFinite(value) || value < 0) throw new CliError(`--init: expected LABEL=CONCENTRATION (mol/L, ≥ 0), got "${pair}"`, EXIT_USAGE);
+    const text = pair.slice(at + 1).trim();
+    const value = text === '' ? Number.NaN : Number(text);
+    if (at <= 0 || Number.isNaN(value)) throw new CliError(`--init: expected LABEL=CONCENTRATION (mol/L, ≥ 0), got "${pair}"`, EXIT_USAGE);
+    const problem = outsideHard('concentration', value);
+    if (problem) throw new CliError(`--init ${pair.slice(0, at)}: ${problem}`, EXIT_USAGE);
     initial.set(pair.slice(0, at), value);
   }
   return initial;
@@ -41,10 +45,12 @@ function readInitial(pairs: readonly string[]): Map<string, number> {
  */
 export function runSimulate(file: string, options: SimulateCliOptions, io: CliIo): void {
   const doc = applySettingOptions(loadInput(file, io), { temperature: options.temperature });
-  const until = positiveOption('until', options.until, 3600);
-  const points = Math.round(positiveOption('points', options.points, 50));
+  const until = boundedOption('until', options.until, 'timeSeconds', 3600);
+  const points = boundedOption('points', options.points, 'simulationPoints', 50, true);
   const chosen = options.species ? fromSpecies(doc) : fromPathway(doc, options.pathway);
   const { network, findings, pathway } = chosen;
+  const states = outsideHard('simulationStates', network.species.length);
+  if (states) throw new CliError(`${states}: simulate a shorter pathway or fewer species (the stiff solver's work grows quickly with the number of states)`);
   const what = pathway ? `a minimum of "${pathway.name}"` : 'a species of the document';
   const byLabel = readInitial(options.init ?? []);
   const initial: Record<string, number> = {};
@@ -57,7 +63,8 @@ export function runSimulate(file: string, options: SimulateCliOptions, io: CliIo
     if (options.species) throw new CliError('--species: give starting concentrations with --init LABEL=CONC', EXIT_USAGE);
     initial[network.species[0]!] = 1;
   }
-  const outcome = simulate(network, initial, { until, points });
+  // The solver stops at every output time, so its step budget grows with the rows asked for.
+  const outcome = simulate(network, initial, { until, points, maxSteps: 100_000 + 4 * points });
   if (!outcome.ok) throw new CliError(outcome.errors.map((e) => `${e.path}: ${e.message}`).join('; '));
   const s = outcome.simulation;
   io.out(tableToCsv({

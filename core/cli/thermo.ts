@@ -1,6 +1,6 @@
 import { thermoReport } from '../thermo/thermoReport.ts';
 import { CliError, EXIT_USAGE, type CliIo } from './io.ts';
-import { positiveOption } from './options.ts';
+import { boundedOption } from './options.ts';
 import { solveFormation, solvedLine } from './thermoSolve.ts';
 import { readText } from './readText.ts';
 
@@ -17,7 +17,7 @@ const num = (v: number | null, digits: number) => (v === null ? '—' : v.toFixe
 /** `passline thermo TABLE --reaction "..."`: Hess's-law reaction thermochemistry from formation data. */
 export function runThermo(tablePath: string, options: ThermoOptions, io: CliIo): void {
   if (!options.reaction) throw new CliError('thermo: --reaction "A + B -> C" is required', EXIT_USAGE);
-  const temperatureK = positiveOption('temperature', options.temperature, 298.15);
+  const temperatureK = boundedOption('temperature', options.temperature, 'temperatureK', 298.15);
   const text = readText(tablePath, io);
   if (options.solve !== undefined || options.given !== undefined) {
     if (!options.solve || !options.given) throw new CliError('thermo: --solve SPECIES and --given dH=VALUE go together', EXIT_USAGE);

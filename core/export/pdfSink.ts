@@ -1,6 +1,7 @@
 import type { jsPDF } from 'jspdf';
 import { MM_PER_PT, type Stroke, type TextItem } from '../figure/scene.ts';
 import type { DrawingSink } from '../figure/sink.ts';
+import { safeText } from '../format/safeText.ts';
 
 /**
  * A sink that draws onto a jsPDF document set up in mm: real path operators
@@ -46,6 +47,6 @@ function drawText(pdf: jsPDF, item: TextItem): void {
     const x = item.x + run.dx * cos - run.dy * sin;
     const y = item.y + run.dx * sin + run.dy * cos;
     pdf.setFontSize(run.sizeMm / MM_PER_PT);
-    pdf.text(run.text, x, y, angle ? { angle: -angle, baseline: 'alphabetic' } : { baseline: 'alphabetic' });
+    pdf.text(safeText(run.text), x, y, angle ? { angle: -angle, baseline: 'alphabetic' } : { baseline: 'alphabetic' });
   }
 }

@@ -15,6 +15,7 @@ import { A4, ReportPages, type PageOp } from './report/reportPages.ts';
 import type { FontSubsetter } from './sceneToPdf.ts';
 import { sceneText } from './sceneText.ts';
 import { toBase64 } from './toBase64.ts';
+import { safeText } from '../format/safeText.ts';
 
 /** Report choices; the figure follows the document's settings unless overridden. */
 export interface ReportOptions {
@@ -50,7 +51,7 @@ export async function renderReport(doc: Document, options: ReportOptions): Promi
   pdf.addFileToVFS('report-font.ttf', toBase64(font));
   pdf.addFont('report-font.ttf', metrics.family, 'normal', 'Identity-H');
   pdf.setFont(metrics.family, 'normal');
-  pdf.setProperties({ title: doc.title || 'Energy profile report', creator: 'Passline' });
+  pdf.setProperties({ title: safeText(doc.title) || 'Energy profile report', creator: 'Passline' });
   pages.pages.forEach((ops, i) => {
     if (i > 0) pdf.addPage('a4', 'portrait');
     for (const op of ops) drawOp(pdf, op);
@@ -69,11 +70,11 @@ function drawOp(pdf: jsPDF, op: PageOp): void {
   }
   pdf.setTextColor(op.colour);
   pdf.setFontSize(op.sizeMm / MM_PER_PT);
-  pdf.text(op.text, op.x, op.y, { baseline: 'alphabetic' });
+  pdf.text(safeText(op.text), op.x, op.y, { baseline: 'alphabetic' });
 }
 
 function usedText(pages: readonly PageOp[][], figure: string): string {
   const chars = new Set(figure);
-  for (const ops of pages) for (const op of ops) if (op.op === 'text') for (const c of op.text) chars.add(c);
+  for (const ops of pages) for (const op of ops) if (op.op === 'text') for (const c of safeText(op.text)) chars.add(c);
   return [...chars].sort().join('');
 }

@@ -4,6 +4,7 @@ import type { Scene } from '../figure/scene.ts';
 import { pdfSink } from './pdfSink.ts';
 import { sceneText } from './sceneText.ts';
 import { toBase64 } from './toBase64.ts';
+import { safeText } from '../format/safeText.ts';
 
 /** Cuts a TrueType font down to the glyphs of `text` (e.g. subset-font in Node). */
 export type FontSubsetter = (font: Uint8Array, text: string) => Promise<Uint8Array>;
@@ -30,7 +31,7 @@ export async function sceneToPdf(scene: Scene, options: PdfOptions): Promise<Uin
   pdf.addFileToVFS(file, toBase64(font));
   pdf.addFont(file, scene.fontFamily, 'normal', 'Identity-H');
   pdf.setFont(scene.fontFamily, 'normal');
-  pdf.setProperties({ title: options.title ?? 'Energy profile', creator: 'Passline' });
+  pdf.setProperties({ title: safeText(options.title ?? 'Energy profile'), creator: 'Passline' });
   drawScene(scene, pdfSink(pdf));
   return new Uint8Array(pdf.output('arraybuffer'));
 }

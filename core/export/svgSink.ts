@@ -1,6 +1,7 @@
 import type { Stroke, TextItem } from '../figure/scene.ts';
 import type { DrawingSink } from '../figure/sink.ts';
 import { escapeXml, num } from './escapeXml.ts';
+import { safeText } from '../format/safeText.ts';
 
 /** A sink that collects SVG elements; `elements` holds them in drawing order. */
 export interface SvgSink extends DrawingSink {
@@ -41,7 +42,7 @@ function textElement(item: TextItem): string {
   if (item.rotateDeg) out += ' transform="rotate(' + num(item.rotateDeg) + ' ' + num(item.x) + ' ' + num(item.y) + ')"';
   out += '>';
   for (const r of item.runs) {
-    out += '<tspan x="' + num(item.x + r.dx) + '" y="' + num(item.y + r.dy) + '" font-size="' + num(r.sizeMm) + '">' + escapeXml(r.text) + '</tspan>';
+    out += '<tspan x="' + num(item.x + r.dx) + '" y="' + num(item.y + r.dy) + '" font-size="' + num(r.sizeMm) + '">' + escapeXml(safeText(r.text)) + '</tspan>';
   }
   return out + '</text>';
 }

@@ -36,8 +36,12 @@ export const BOUNDS = {
   reorganisationKJ: bound('reorganisation energy λ', 'kJ/mol', [1e-3, 10_000], [10, 1_000]),
   /** Figure width or height. */
   figureMm: bound('figure size', 'mm', [20, 2_000], [40, 500]),
-  /** Any other length on the figure (bar width, label offset, structure size). */
+  /** Any other length on the figure (bar width, structure size). */
   lengthMm: bound('length', 'mm', [0, 500], [0, 100]),
+  /** A shift on the figure (label offset), either direction. */
+  offsetMm: bound('offset', 'mm', [-500, 500], [-100, 100]),
+  /** PNG resolution. */
+  dpi: bound('resolution', 'dpi', [36, 2_400], [72, 1_200]),
   /** Font size. */
   fontPt: bound('font size', 'pt', [2, 72], [5, 24]),
   /** Line width. */
@@ -48,6 +52,22 @@ export const BOUNDS = {
   count: bound('count', '', [1e-6, 1_000], [1, 100]),
   /** Concentration, mol/L. */
   concentration: bound('concentration', 'mol/L', [0, 1e4], [1e-9, 100]),
+  /** Net charge of a species, in elementary charges. */
+  charge: bound('charge', 'e', [-100, 100], [-4, 4]),
+  /** Standard molar entropy, J/(mol K); ions in solution may be negative. */
+  entropy: bound('entropy', 'J/(mol K)', [-10_000, 10_000], [-500, 2_000]),
+  /** Bell–Evans–Polanyi slope α (dimensionless; usually between 0 and 1). */
+  bepSlope: bound('Bell–Evans–Polanyi slope α', '', [-10, 10], [0, 1]),
+  /** Points in one document, over all pathways: beyond this layout and analysis stop being interactive. */
+  pointCount: bound('number of points', '', [0, 5_000], [0, 500]),
+  /** Characters in one label, name or annotation text. */
+  textLength: bound('text length', 'characters', [0, 1_000], [0, 80]),
+  /** Output rows of a simulation (`simulate --points`). */
+  simulationPoints: bound('number of output times', '', [2, 10_000], [10, 1_000]),
+  /** States (species) in one microkinetic simulation: the stiff solver's work grows with their number. */
+  simulationStates: bound('number of states in a simulation', '', [1, 100], [1, 30]),
+  /** Temperatures in a scan (`scan --count`). */
+  scanCount: bound('number of temperatures', '', [1, 1_000], [2, 100]),
 } as const satisfies Record<string, Bound>;
 
 export type BoundName = keyof typeof BOUNDS;

@@ -2,6 +2,7 @@ import type { z } from 'zod';
 import { Document, describe, FORMAT_VERSION, type DocumentInput } from './schema.ts';
 import { migrate } from './migrate.ts';
 import { referenceProblems } from './references.ts';
+import { documentLimits } from './documentLimits.ts';
 
 /** One problem in a document, with the field path in `pathways[1].points[3].energy` form. */
 export interface DocumentError {
@@ -56,7 +57,10 @@ function messageFor(issue: z.core.$ZodIssue, root: unknown): string {
 /** Validates an already-parsed JSON value (after migration). */
 export function validateDocument(raw: unknown): LoadResult {
   const migrated = migrate(raw);
-  if (!migrated.ok) return { ok: false, errors: [{ path: migrated.message.split(':')[0] ?? '', message: migrated.message.replace(/^[^:]*:\s*/, '') }] };
+  if (!migrated.ok) {
+    const field = /^(\w+): /.exec(migrated.message);
+    return { ok: false, errors: [field ? { path: field[1]!, message: migrated.message.slice(field[0].length) } : { path: '(document)', message: migrated.message }] };
+  }
   const parsed = Document.safeParse(migrated.doc);
   if (!parsed.success) {
     const errors = parsed.error.issues.slice(0, MAX_ERRORS).map((issue) => ({
@@ -65,7 +69,7 @@ export function validateDocument(raw: unknown): LoadResult {
     }));
     return { ok: false, errors };
   }
-  const problems = referenceProblems(parsed.data);
+  const problems = [...documentLimits(parsed.data), ...referenceProblems(parsed.data)];
   if (problems.length > 0) return { ok: false, errors: problems.slice(0, MAX_ERRORS) };
   return migrated.migratedFrom ? { ok: true, doc: parsed.data, migratedFrom: migrated.migratedFrom } : { ok: true, doc: parsed.data };
 }

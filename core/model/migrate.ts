@@ -2,6 +2,8 @@ import { FORMAT_VERSION } from './schema.ts';
 
 type Json = Record<string, unknown>;
 
+const isObject = (value: unknown): value is Json => typeof value === 'object' && value !== null && !Array.isArray(value);
+
 /**
  * Upgrades older document shapes one version at a time. Version 1 was the early draft
  * format: points without ids and with a bare number as energy, read in `settings.unit`
@@ -10,16 +12,16 @@ type Json = Record<string, unknown>;
  */
 const MIGRATIONS: Record<number, (doc: Json) => Json> = {
   1: (doc) => {
-    const settings = (doc.settings ?? {}) as Json;
+    const settings = isObject(doc.settings) ? doc.settings : {};
     const unit = typeof settings.unit === 'string' ? settings.unit : 'kcal/mol';
-    const pathways = Array.isArray(doc.pathways) ? doc.pathways : [];
     return {
       ...doc,
       version: 2,
-      pathways: pathways.map((pathway: Json, i: number) => ({
+      // Entries that are not objects (null, a number) are left for validation to name.
+      pathways: !Array.isArray(doc.pathways) ? doc.pathways : doc.pathways.map((pathway: unknown, i: number) => (!isObject(pathway) ? pathway : {
         ...pathway,
         id: pathway.id ?? `pathway-${i + 1}`,
-        points: (Array.isArray(pathway.points) ? pathway.points : []).map((point: Json, j: number) => ({
+        points: !Array.isArray(pathway.points) ? pathway.points : pathway.points.map((point: unknown, j: number) => (!isObject(point) ? point : {
           ...point,
           id: point.id ?? `p${j + 1}`,
           energy: typeof point.energy === 'number' ? { mode: 'value', value: point.energy, unit } : point.energy,

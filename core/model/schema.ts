@@ -1,5 +1,7 @@
 import { z } from 'zod';
 import { ENERGY_UNITS } from '../units/energy.ts';
+import { bounded, boundedInt, boundedText, checkEnergyField } from './bounded.ts';
+import { describe } from './describe.ts';
 
 /**
  * The Passline document, format version 1. A `.passline` file is this object as JSON.
@@ -13,14 +15,7 @@ const finite = (what: string) =>
   z.number({ error: (issue) => `expected a number${what}, got ${describe(issue.input)}` })
     .refine(Number.isFinite, { message: `expected a finite number${what}` });
 
-/** Short description of an offending value for messages. */
-export function describe(value: unknown): string {
-  if (value === undefined) return 'nothing';
-  if (typeof value === 'string') return JSON.stringify(value.length > 40 ? `${value.slice(0, 40)}…` : value);
-  if (typeof value === 'number') return String(value);
-  if (value === null) return 'null';
-  return Array.isArray(value) ? 'a list' : typeof value;
-}
+export { describe };
 
 export const Unit = z.enum(ENERGY_UNITS, { error: (i) => `expected one of ${ENERGY_UNITS.join(', ')}, got ${describe(i.input)}` });
 export const Quantity = z.enum(['E', 'H', 'G'], { error: (i) => `expected E, H or G, got ${describe(i.input)}` });
@@ -30,51 +25,51 @@ const positive = (what: string) => finite(what).refine((v) => v > 0, { message: 
 /** One species count inside a state: `{ species: "cat", count: 1 }`. */
 export const SpeciesTerm = z.strictObject({
   species: z.string().min(1),
-  count: finite('').refine((v) => v > 0, { message: 'expected a positive count' }),
+  count: bounded('count'),
 });
 
 /** Absolute energies of one structure, in hartree. */
 export const Structure = z.strictObject({
-  label: z.string().optional(),
-  electronic: finite(' in hartree'),
-  singlePoint: finite(' in hartree').optional(),
-  hCorrection: finite(' in hartree').optional(),
-  gCorrection: finite(' in hartree').optional(),
+  label: boundedText().optional(),
+  electronic: bounded('absoluteEnergyHartree', ' in hartree'),
+  singlePoint: bounded('absoluteEnergyHartree', ' in hartree').optional(),
+  hCorrection: bounded('correctionHartree', ' in hartree').optional(),
+  gCorrection: bounded('correctionHartree', ' in hartree').optional(),
 });
 
 export const Species = z.strictObject({
   id: z.string().min(1, 'expected a non-empty id'),
-  label: z.string(),
-  formula: z.string().optional(),
-  charge: finite('').optional(),
+  label: boundedText(),
+  formula: boundedText().optional(),
+  charge: bounded('charge').optional(),
   /** How this species enters a standard-state correction. */
   phase: z.enum(['solute', 'solvent', 'gas', 'none']).default('solute'),
   /** Molar concentration of the neat liquid (mol/L) when phase is 'solvent'. */
-  neatConcentration: positive(' in mol/L').optional(),
+  neatConcentration: positive(' in mol/L').pipe(bounded('concentration')).optional(),
   /** Temperature (K) at which the thermal corrections were computed. */
-  correctionTemperatureK: positive(' in K').optional(),
+  correctionTemperatureK: bounded('temperatureK', ' in K').optional(),
   /** One structure, or several conformers that are Boltzmann-weighted. */
   structures: z.array(Structure).default([]),
   formation: z.strictObject({
-    dfH: finite(' in kJ/mol').optional(),
-    S: finite(' in J/(mol K)').optional(),
-    dfG: finite(' in kJ/mol').optional(),
+    dfH: bounded('relativeEnergyKJ', ' in kJ/mol').optional(),
+    S: bounded('entropy', ' in J/(mol K)').optional(),
+    dfG: bounded('relativeEnergyKJ', ' in kJ/mol').optional(),
   }).optional(),
 });
 
 const valueIn = finite('');
-const EnergyValue = z.strictObject({ mode: z.literal('value'), value: valueIn, unit: Unit, quantity: Quantity.optional() });
+const EnergyValue = z.strictObject({ mode: z.literal('value'), value: valueIn, unit: Unit, quantity: Quantity.optional() }).superRefine(checkEnergyField('relativeEnergyKJ', 'value'));
 const EnergySpecies = z.strictObject({ mode: z.literal('species'), terms: z.array(SpeciesTerm).min(1, 'expected at least one species') });
 const EnergyFormation = z.strictObject({ mode: z.literal('formation'), terms: z.array(SpeciesTerm).min(1, 'expected at least one species') });
-const EnergyStep = z.strictObject({ mode: z.literal('step'), value: valueIn, unit: Unit, quantity: Quantity.optional() });
-const EnergyBarrier = z.strictObject({ mode: z.literal('barrier'), value: valueIn, unit: Unit, quantity: Quantity.optional() });
+const EnergyStep = z.strictObject({ mode: z.literal('step'), value: valueIn, unit: Unit, quantity: Quantity.optional() }).superRefine(checkEnergyField('relativeEnergyKJ', 'value'));
+const EnergyBarrier = z.strictObject({ mode: z.literal('barrier'), value: valueIn, unit: Unit, quantity: Quantity.optional() }).superRefine(checkEnergyField('relativeEnergyKJ', 'value'));
 
-const RatePoint = z.strictObject({ temperatureK: positive(' in K'), k: positive(' (rate constant)') });
+const RatePoint = z.strictObject({ temperatureK: bounded('temperatureK', ' in K'), k: bounded('rateConstant', ' (rate constant)') });
 export const Estimate = z.discriminatedUnion('method', [
-  z.strictObject({ method: z.literal('marcus'), lambda: positive(''), unit: Unit }),
-  z.strictObject({ method: z.literal('bep'), e0: valueIn, alpha: valueIn, unit: Unit }),
-  z.strictObject({ method: z.literal('rateConstant'), k: positive(' (rate constant)'), molecularity: z.int().min(1).max(3).default(1), temperatureK: positive(' in K').optional() }),
-  z.strictObject({ method: z.literal('halfLife'), seconds: positive(' in s'), temperatureK: positive(' in K').optional() }),
+  z.strictObject({ method: z.literal('marcus'), lambda: positive(''), unit: Unit }).superRefine(checkEnergyField('reorganisationKJ', 'lambda')),
+  z.strictObject({ method: z.literal('bep'), e0: valueIn, alpha: bounded('bepSlope'), unit: Unit }).superRefine(checkEnergyField('relativeEnergyKJ', 'e0')),
+  z.strictObject({ method: z.literal('rateConstant'), k: bounded('rateConstant', ' (rate constant)'), molecularity: z.int().min(1).max(3).default(1), temperatureK: bounded('temperatureK', ' in K').optional() }),
+  z.strictObject({ method: z.literal('halfLife'), seconds: bounded('timeSeconds', ' in s'), temperatureK: bounded('temperatureK', ' in K').optional() }),
   z.strictObject({ method: z.literal('eyringFit'), data: z.array(RatePoint).min(2, 'expected at least two (T, k) points') }),
   z.strictObject({ method: z.literal('arrhenius'), data: z.array(RatePoint).min(2, 'expected at least two (T, k) points') }),
 ], { error: (i) => `expected an estimate method (marcus, bep, rateConstant, halfLife, eyringFit, arrhenius), got ${describe((i.input as { method?: unknown } | undefined)?.method)}` });
@@ -86,7 +81,7 @@ export const EnergySpec = z.discriminatedUnion('mode', [EnergyValue, EnergySpeci
 
 export const Point = z.strictObject({
   id: z.string().min(1),
-  label: z.string(),
+  label: boundedText(),
   kind: PointKind,
   energy: EnergySpec,
   /**
@@ -95,9 +90,9 @@ export const Point = z.strictObject({
    */
   composition: z.array(SpeciesTerm).optional(),
   /** Layout overrides, in figure units (slot index) and mm. */
-  x: finite('').optional(),
-  barWidthMm: positive(' in mm').optional(),
-  labelOffsetMm: z.strictObject({ dx: finite(' in mm'), dy: finite(' in mm') }).optional(),
+  x: bounded('coordinate').optional(),
+  barWidthMm: positive(' in mm').pipe(bounded('lengthMm')).optional(),
+  labelOffsetMm: z.strictObject({ dx: bounded('offsetMm', ' in mm'), dy: bounded('offsetMm', ' in mm') }).optional(),
 });
 
 export const PathwayStyle = z.strictObject({
@@ -111,7 +106,7 @@ export const Branch = z.strictObject({ pathway: z.string().min(1), point: z.stri
 
 export const Pathway = z.strictObject({
   id: z.string().min(1),
-  name: z.string(),
+  name: boundedText(),
   cycle: z.boolean().default(false),
   /** This pathway branches from a point of another: its energies are shifted so its first point sits there. */
   branch: Branch.optional(),
@@ -121,12 +116,12 @@ export const Pathway = z.strictObject({
 
 export const Settings = z.strictObject({
   quantity: Quantity.default('G'),
-  temperatureK: positive(' in K').default(298.15),
+  temperatureK: bounded('temperatureK', ' in K').default(298.15),
   unit: Unit.default('kcal/mol'),
   /** 1 atm or 1 bar gas-phase values corrected to 1 mol/L per solute species. */
   standardState: z.enum(['as-computed', '1atm-to-1M', '1bar-to-1M']).default('as-computed'),
   decimals: z.int().min(0).max(6).default(1),
-  transmission: positive('').default(1),
+  transmission: bounded('transmission').default(1),
   /**
    * What every energy is measured from (see core/profile/referenceFrame.ts):
    * `zero` (default) one document-wide zero — typed and stepwise values are shown as typed,
@@ -144,11 +139,11 @@ export const Settings = z.strictObject({
 
 export const Figure = z.strictObject({
   preset: z.enum(['single', 'double', 'slide']).default('double'),
-  widthMm: positive(' in mm').optional(),
-  heightMm: positive(' in mm').optional(),
+  widthMm: bounded('figureMm', ' in mm').optional(),
+  heightMm: bounded('figureMm', ' in mm').optional(),
   theme: z.enum(['colour', 'greyscale', 'dark']).default('colour'),
-  fontSizePt: positive(' in pt').default(8),
-  lineWidthPt: positive(' in pt').default(1),
+  fontSizePt: bounded('fontPt', ' in pt').default(8),
+  lineWidthPt: bounded('linePt', ' in pt').default(1),
   connector: z.enum(['dashed', 'line', 'curve']).default('dashed'),
   showAxis: z.boolean().default(true),
   showCoordinateArrow: z.boolean().default(true),
@@ -158,7 +153,7 @@ export const Figure = z.strictObject({
   annotations: z.array(z.discriminatedUnion('type', [
     z.strictObject({ type: z.literal('barrier'), pathway: z.string(), from: z.string(), to: z.string() }),
     z.strictObject({ type: z.literal('span'), pathway: z.string() }),
-    z.strictObject({ type: z.literal('text'), text: z.string(), x: finite(''), y: finite('') }),
+    z.strictObject({ type: z.literal('text'), text: boundedText(), x: bounded('coordinate'), y: finite('') }),
   ])).default([]),
 });
 
@@ -171,7 +166,7 @@ export const Comparison = z.discriminatedUnion('type', [
 export const Document = z.strictObject({
   format: z.literal(FORMAT_ID, { error: 'expected "passline" (this is not a Passline document)' }),
   version: z.literal(FORMAT_VERSION),
-  title: z.string().default(''),
+  title: boundedText().default(''),
   settings: Settings.default(() => Settings.parse({})),
   species: z.array(Species).default([]),
   pathways: z.array(Pathway).default([]),

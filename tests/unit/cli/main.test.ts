@@ -181,7 +181,7 @@ describe('passline render', () => {
 
   it('bad options are usage errors; an unwritable output is one line with exit 1', async () => {
     expect(await renderRun(['render', 'assets/demo/demo.passline', '-o', 'fig.gif'])).toMatchObject({ code: 2 });
-    expect((await renderRun(['render', 'assets/demo/demo.passline', '-o', 'f.png', '--dpi', '5'])).err).toContain('--dpi: expected 36–2400, got 5');
+    expect((await renderRun(['render', 'assets/demo/demo.passline', '-o', 'f.png', '--dpi', '5'])).err).toContain('--dpi: resolution 5 dpi is outside 36 to 2400 dpi');
     expect((await renderRun(['render', 'assets/demo/demo.passline', '-o', 'f.svg', '--theme', 'neon'])).err).toContain('--theme: expected one of colour, greyscale, dark');
     expect((await renderRun(['render', 'assets/demo/demo.passline'])).code).toBe(2);
     expect(await renderRun(['render', 'assets/demo/demo.passline', '-o', '/nope/f.svg'])).toEqual({ code: 1, err: 'passline render: cannot write /nope/f.svg: ENOENT\n' });

@@ -47,7 +47,7 @@ describe('settings edits', () => {
   it('refuse a temperature at or below 0 K with a message', () => {
     const doc = twoRoutes();
     expect(setSettings(doc, { temperatureK: 0 })).toBe(doc);
-    expect(settingsProblem(doc.settings, { temperatureK: -5 })).toMatch(/temperatureK: expected a positive number in K/);
+    expect(settingsProblem(doc.settings, { temperatureK: -5 })).toMatch(/temperatureK: temperature -5 K is outside 1 to 10000 K/);
     expect(setFigure(doc, { theme: 'dark' }).figure.theme).toBe('dark');
     expect(setFigure(doc, { fontSizePt: -1 })).toBe(doc);
   });

@@ -7,6 +7,7 @@ import { createDesktopHost, type DesktopDialogs, type OverwriteChoice } from '..
 import { PathGrants } from '../../../electron/pathGrants.ts';
 import { RecentStore } from '../../../electron/recentStore.ts';
 import { RecoveryStore } from '../../../electron/recoveryStore.ts';
+import { DropRegistry } from '../../../electron/dropRegistry.ts';
 
 let folder: string;
 beforeEach(() => { folder = mkdtempSync(join(tmpdir(), 'passline-host-')); });
@@ -29,8 +30,9 @@ function makeHost(d: DesktopDialogs = dialogs([])) {
   const recovery = new RecoveryStore(join(data, 'recovery'));
   const closeReplies: unknown[] = [];
   const onRecentChanged = vi.fn();
-  const host = createDesktopHost({ dialogs: d, grants: new PathGrants(), recent, recovery, onCloseReply: async (reply) => void closeReplies.push(reply), onRecentChanged, log: () => undefined });
-  return { host, recent, recovery, closeReplies, onRecentChanged };
+  const drops = new DropRegistry();
+  const host = createDesktopHost({ dialogs: d, grants: new PathGrants(), drops, recent, recovery, onCloseReply: async (reply) => void closeReplies.push(reply), onRecentChanged, log: () => undefined });
+  return { host, recent, recovery, closeReplies, onRecentChanged, drops };
 }
 
 function doc(name: string, text: string): string {
@@ -200,13 +202,25 @@ describe('desktop host: known files, drops and the recent list', () => {
   });
 
   it('opens a dropped document but refuses other files, folders and made-up paths', async () => {
-    const { host } = makeHost();
+    const { host, drops } = makeHost();
     const dropped = doc('dropped.passline', 'D');
-    expect(await host.openDroppedFile(dropped)).toEqual({ name: 'dropped.passline', path: dropped, text: 'D' });
-    await expect(host.openDroppedFile(doc('notes.txt', 'x'))).rejects.toThrow('only .passline documents can be opened');
+    const notes = doc('notes.txt', 'x');
     mkdirSync(join(folder, 'folder.passline'));
+    drops.record([dropped, notes, join(folder, 'folder.passline'), 'relative.passline']);
+    expect(await host.openDroppedFile(dropped)).toEqual({ name: 'dropped.passline', path: dropped, text: 'D' });
+    await expect(host.openDroppedFile(notes)).rejects.toThrow('only .passline documents can be opened');
     await expect(host.openDroppedFile(join(folder, 'folder.passline'))).rejects.toThrow('it is not a file');
     await expect(host.openDroppedFile('relative.passline')).rejects.toThrow('not an absolute path');
+  });
+
+  it('reads and grants no path that did not come from a real drop', async () => {
+    const { host, drops } = makeHost();
+    const secret = doc('secret.passline', 'S');
+    await expect(host.openDroppedFile(secret)).rejects.toThrow('secret.passline was not dropped on the window; use Open… to pick it');
+    drops.record([secret]);
+    await host.openDroppedFile(secret);
+    await expect(host.openDroppedFile(secret)).rejects.toThrow('was not dropped'); // a drop opens once
+    expect(await host.saveDocument({ suggestedName: 'x.passline', text: 'new', path: doc('other.passline', 'O') })).toBeNull();
   });
 });
 
@@ -222,21 +236,23 @@ describe('desktop host: working copy and closing', () => {
     expect(closeReplies).toEqual([{ dirty: true, name: 'untitled.passline' }]);
   });
 
-  it('offers a copy left by a crashed session, and lets the restored text save back to its file', async () => {
+  it('offers a copy left by a crashed session as untitled text: a path named in the autosave is never granted', async () => {
     const path = doc('route.passline', 'on disk');
+    const elsewhere = doc('not-chosen.passline', 'keep me'); // named by the renderer, never picked by the user
     const first = makeHost(dialogs([path]));
     await first.recovery.begin();
-    await first.host.autosave({ name: 'route.passline', path, text: 'unsaved edits' });
+    await first.host.autosave({ name: 'route.passline', path: elsewhere, text: 'unsaved edits' });
     // No end(): the session crashed. A new session starts on the same data folder.
     const recovery = new RecoveryStore(join(folder, 'app-data', 'recovery'));
     await recovery.begin();
-    const d = dialogs([]);
-    const host = createDesktopHost({ dialogs: d, grants: new PathGrants(), recent: new RecentStore(join(folder, 'app-data')), recovery, onCloseReply: async () => undefined, onRecentChanged: () => undefined, log: () => undefined });
+    const d = dialogs([], [null]);
+    const host = createDesktopHost({ dialogs: d, grants: new PathGrants(), drops: new DropRegistry(), recent: new RecentStore(join(folder, 'app-data')), recovery, onCloseReply: async () => undefined, onRecentChanged: () => undefined, log: () => undefined });
     const offer = await host.recoveryOffer();
-    expect(offer).toMatchObject({ name: 'route.passline', path, text: 'unsaved edits' });
-    await host.saveDocument({ suggestedName: 'route.passline', text: offer!.text, path });
-    expect(d.pickSavePath).not.toHaveBeenCalled();
-    expect(readFileSync(path, 'utf8')).toBe('unsaved edits');
+    expect(offer).toEqual({ name: 'route.passline', text: 'unsaved edits', savedAt: expect.any(String) });
+    expect(await host.saveDocument({ suggestedName: 'route.passline', text: offer!.text, path: elsewhere })).toBeNull();
+    expect(d.pickSavePath).toHaveBeenCalledTimes(1); // the save asked where; the user cancelled
+    expect(readFileSync(elsewhere, 'utf8')).toBe('keep me');
+    expect(readFileSync(path, 'utf8')).toBe('on disk');
     await host.dismissRecovery();
     expect(await host.recoveryOffer()).toBeNull();
   });

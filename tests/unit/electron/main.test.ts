@@ -4,6 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { HOST_COMMAND_CHANNEL, hostChannels } from '../../../ui/host/hostApi.ts';
+import { DROP_CHANNEL } from '../../../electron/dropRegistry.ts';
 
 // Electron's binary is absent here (STACK.md): the main process runs against recording
 // stand-ins for app, windows, IPC and menus, on a real data folder and real documents.
@@ -67,7 +68,7 @@ vi.mock('electron', () => ({
     on: (event: string, listener: Listener) => void appEvents.set(event, listener),
   },
   BrowserWindow: FakeWindow,
-  ipcMain: { handle: (channel: string, listener: Listener) => void handlers.set(channel, listener) },
+  ipcMain: { handle: (channel: string, listener: Listener) => void handlers.set(channel, listener), on: (channel: string, listener: Listener) => void handlers.set(channel, listener) },
   Menu: { buildFromTemplate: (template: unknown) => template, setApplicationMenu: (menu: unknown) => void menus.push(menu) },
   screen: { getAllDisplays: () => [{ workArea: { x: 0, y: 0, width: 1920, height: 1080 } }] },
   dialog: { showMessageBox: vi.fn(async () => ({ response: 2 })), showOpenDialog: vi.fn(), showSaveDialog: vi.fn() },
@@ -94,8 +95,17 @@ function invoke(channel: string, ...args: unknown[]) {
 }
 
 describe('main process', () => {
+  it('opens a dropped path only after preload announced it from a real drop, from an app window', async () => {
+    await expect(invoke(hostChannels.openDroppedFile, doc)).rejects.toThrow('was not dropped on the window');
+    const foreign = { sender: { id: 999 }, senderFrame: { url: 'https://example.invalid/', parent: null } };
+    handlers.get(DROP_CHANNEL)!(foreign, [doc]);
+    await expect(invoke(hostChannels.openDroppedFile, doc)).rejects.toThrow('was not dropped on the window');
+    invoke(DROP_CHANNEL, [doc]);
+    expect(await invoke(hostChannels.openDroppedFile, doc)).toMatchObject({ name: 'route.passline', path: doc });
+  });
+
   it('serves every host channel and sets the menu', () => {
-    expect([...handlers.keys()].sort()).toEqual(Object.values(hostChannels).sort());
+    expect([...handlers.keys()].sort()).toEqual([...Object.values(hostChannels), DROP_CHANNEL].sort());
     expect(menus.length).toBeGreaterThan(0);
   });
 

@@ -5,7 +5,7 @@ import { renderFigure as renderPure, type RenderOptions } from './renderFigure.t
 import { subsetFontNode } from './subsetFont.node.ts';
 
 /**
- * renderFigure for Node (the CLI): PDF fonts are subset with subset-font and PNG is
+ * renderFigure for Node (the CLI): PDF fonts are subset with HarfBuzz (subsetFont.node.ts) and PNG is
  * rasterised by resvg with the bundled font. Same signature as the pure version.
  */
 export function renderFigure(profile: ResolvedProfile, doc: Document, options: RenderOptions): Promise<Uint8Array | string> {

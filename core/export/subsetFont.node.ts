@@ -19,6 +19,7 @@ interface HbSubset {
   hb_subset_input_destroy(input: number): void;
   hb_subset_input_unicode_set(input: number): number;
   hb_subset_input_set_flags(input: number, flags: number): void;
+  hb_subset_input_set(input: number, setType: number): number;
   hb_subset_or_fail(face: number, input: number): number;
   _initialize(): void;
 }
@@ -26,6 +27,13 @@ interface HbSubset {
 // hb-blob.h and hb-subset.h constants.
 const HB_MEMORY_MODE_READONLY = 1;
 const HB_SUBSET_FLAGS_NO_HINTING = 0x1;
+const HB_SUBSET_SETS_DROP_TABLE_TAG = 3;
+
+/** An OpenType table tag as HarfBuzz's 32-bit number (big-endian ASCII, hb_tag_t). */
+const tag = (name: string) => [...name].reduce((n, ch) => n * 256 + ch.charCodeAt(0), 0);
+// OpenType layout tables: only a shaping engine reads them, and jsPDF places glyphs one by one
+// from the cmap. Dropping them also spares the GSUB closure, most of the subsetting time.
+const LAYOUT_TABLES = ['GSUB', 'GPOS', 'GDEF'].map(tag);
 
 let instance: Promise<HbSubset> | undefined;
 
@@ -43,8 +51,9 @@ function hbSubset(): Promise<HbSubset> {
 
 /**
  * Subsets a TrueType font to the code points of `text` with HarfBuzz's hb-subset, keeping
- * TrueType outlines, the cmap and the name table (which jsPDF reads); hinting is dropped,
- * since PDF viewers scale outlines themselves. Node only (the wasm is read with node:fs).
+ * TrueType outlines, the cmap and the name table (which jsPDF reads); hinting and the
+ * OpenType layout tables are dropped, since PDF viewers scale outlines themselves and jsPDF
+ * does no shaping. Node only (the wasm is read with node:fs).
  * Throws if HarfBuzz cannot parse or subset the font.
  */
 export const subsetFontNode: FontSubsetter = async (font, text) => {
@@ -59,6 +68,8 @@ export const subsetFontNode: FontSubsetter = async (font, text) => {
     const unicodes = hb.hb_subset_input_unicode_set(input);
     for (const ch of text) hb.hb_set_add(unicodes, ch.codePointAt(0)!);
     hb.hb_subset_input_set_flags(input, HB_SUBSET_FLAGS_NO_HINTING);
+    const dropped = hb.hb_subset_input_set(input, HB_SUBSET_SETS_DROP_TABLE_TAG);
+    for (const t of LAYOUT_TABLES) hb.hb_set_add(dropped, t);
     const subset = hb.hb_subset_or_fail(face, input);
     if (!subset) throw new Error('subsetFont: HarfBuzz could not subset the font');
     const out = hb.hb_face_reference_blob(subset);

@@ -1,5 +1,6 @@
 import { readFile } from 'node:fs/promises';
 import { createRequire } from 'node:module';
+import { setFlagsFromString } from 'node:v8';
 import type { FontSubsetter } from './sceneToPdf.ts';
 
 /** The C entry points of HarfBuzz's hb-subset (hb-subset.h) that harfbuzz-subset.wasm exports. */
@@ -40,6 +41,10 @@ let instance: Promise<HbSubset> | undefined;
 /** Instantiates harfbuzz-subset.wasm (shipped by harfbuzzjs) once per process; it imports nothing. */
 function hbSubset(): Promise<HbSubset> {
   instance ??= (async () => {
+    // Baseline code only: otherwise V8 also recompiles the whole 0.7 MB module with its
+    // optimising compiler on background threads, 0.5–0.8 s of CPU (measured on Node 20 with
+    // tests/bench/cliBench.mjs) for a subset that takes milliseconds either way.
+    setFlagsFromString('--liftoff-only');
     const path = createRequire(import.meta.url).resolve('harfbuzzjs/dist/harfbuzz-subset.wasm');
     const { instance: wasm } = await WebAssembly.instantiate(await readFile(path));
     const hb = wasm.exports as unknown as HbSubset;

@@ -1,6 +1,5 @@
 import { parseArgs } from 'node:util';
 import { readFileSync } from 'node:fs';
-import { atomicWrite } from '../io/atomicWrite.node.ts';
 import { CliError, EXIT_OK, EXIT_USAGE, type CliIo } from './io.ts';
 import { commandHelp, HELP, VERSION } from './help.ts';
 
@@ -10,7 +9,8 @@ export const nodeIo: CliIo = {
   err: (text) => process.stderr.write(text),
   readFile: (path) => readFileSync(path, 'utf8'),
   readBytes: (path) => new Uint8Array(readFileSync(path)),
-  writeFile: atomicWrite,
+  // Loaded on first write: it needs node:crypto, which `--version` or `analyze` never do.
+  writeFile: async (path, data) => (await import('../io/atomicWrite.node.ts')).atomicWrite(path, data),
 };
 
 type Command = (positionals: string[], values: Record<string, string | boolean | string[] | undefined>, io: CliIo) => void | Promise<void>;

@@ -11,6 +11,7 @@ export default defineConfig({
           environment: 'node',
           include: ['tests/unit/**/*.test.ts'],
           exclude: ['tests/unit/ui/**'],
+          globalSetup: ['tests/unit/cli/buildCliSetup.ts'],
         },
       },
       {

@@ -1,5 +1,6 @@
 #!/usr/bin/env node
-// Command-line entry: runs the TypeScript CLI through tsx so no build step is needed.
+// Runs the CLI from its TypeScript sources through tsx, for developers (npm run cli:src -- ARGS);
+// the installed `passline` is the bundle that core/cli/build.mjs makes at npm install.
 import { register } from 'tsx/esm/api';
 
 register();

@@ -4,7 +4,7 @@ import type { Preset } from '../figure/presets.ts';
 import type { ThemeName } from '../figure/themes.ts';
 import type { Document } from '../model/schema.ts';
 import type { ResolvedProfile } from '../profile/types.ts';
-import { sceneToPdf, type FontSubsetter } from './sceneToPdf.ts';
+import type { FontSubsetter } from './sceneToPdf.ts';
 import { sceneToSvg } from './sceneToSvg.ts';
 
 export type FigureFormat = 'svg' | 'pdf' | 'png';
@@ -60,6 +60,8 @@ export async function renderFigure(profile: ResolvedProfile, doc: Document, opti
     ...(options.autoSubscript !== undefined ? { autoSubscript: options.autoSubscript } : {}),
   });
   if (options.format === 'pdf') {
+    // Loaded on demand: jsPDF is most of the code an SVG or PNG export would otherwise load.
+    const { sceneToPdf } = await import('./sceneToPdf.ts');
     return sceneToPdf(scene, { fontBytes: options.fontBytes, ...(options.subsetFont ? { subsetFont: options.subsetFont } : {}), title: doc.title || 'Energy profile' });
   }
   const svg = sceneToSvg(scene, options.embedFontInSvg && options.format === 'svg' ? { embedFont: options.fontBytes } : {});

@@ -6,7 +6,7 @@ import { sceneText } from './sceneText.ts';
 import { toBase64 } from './toBase64.ts';
 import { safeText } from '../format/safeText.ts';
 
-/** Cuts a TrueType font down to the glyphs of `text` (e.g. subset-font in Node). */
+/** Cuts a TrueType font down to the glyphs of `text` (e.g. subsetFont.node.ts, HarfBuzz in Node). */
 export type FontSubsetter = (font: Uint8Array, text: string) => Promise<Uint8Array>;
 
 /** PDF output choices. */

@@ -1,8 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { execFileSync, spawnSync } from 'node:child_process';
+import { spawnSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import { main } from '../../../core/cli/main.ts';
 import type { CliIo } from '../../../core/cli/io.ts';
+import { passline } from './cliBin.ts';
 
 const root = new URL('../../../', import.meta.url).pathname;
 
@@ -108,13 +109,40 @@ describe('passline thermo', () => {
 });
 
 describe('the installed command', () => {
-  it('runs as a real process through its bin entry, with exit codes', () => {
-    const bin = `${root}core/cli/passline.mjs`;
-    expect(execFileSync('node', [bin, '--version'], { encoding: 'utf8' })).toMatch(/^passline /);
-    const failed = spawnSync('node', [bin, 'analyze', `${root}no-such-file.csv`], { encoding: 'utf8' });
+  it('runs as a real process through its bin entry (the bundle), with exit codes', () => {
+    expect(passline(['--version']).stdout).toMatch(/^passline \d+\.\d+\.\d+\n$/);
+    const failed = passline(['analyze', `${root}no-such-file.csv`]);
     expect(failed.status).toBe(1);
-    expect(failed.stderr).not.toContain('    at '); // one line, no stack trace
-  }, 60_000); // two cold Node starts with tsx; generous for a loaded 2-core machine
+    expect(failed.stderr).toBe(`passline analyze: cannot read ${root}no-such-file.csv: ENOENT\n`); // one line, no stack trace
+  });
+
+  it('gives the same answers from the TypeScript sources through tsx (the developers\' route)', () => {
+    const fromSources = spawnSync('node', [`${root}core/cli/passline.mjs`, 'analyze', 'assets/demo/demo.passline', '--json'], { cwd: root, encoding: 'utf8' });
+    expect(fromSources.status).toBe(0);
+    expect(fromSources.stdout).toBe(passline(['analyze', 'assets/demo/demo.passline', '--json']).stdout);
+  }, 60_000); // a cold Node start with tsx; generous for a loaded 2-core machine
+});
+
+describe('help', () => {
+  it('COMMAND --help (and help COMMAND) prints that command\'s usage and options only', async () => {
+    for (const argv of [['render', '--help'], ['render', '-h'], ['help', 'render']]) {
+      const { code, out } = await run(argv);
+      expect(code).toBe(0);
+      expect(out).toContain('passline render FILE -o OUT.svg|OUT.pdf|OUT.png');
+      expect(out).toContain('--out-dir DIR');
+      expect(out).not.toMatch(/passline (analyze|thermo|simulate|report|tables|scan) /);
+    }
+    expect((await run(['analyze', '--help'])).out).not.toContain('passline render');
+  });
+
+  it('a usage error points at the command\'s own help', async () => {
+    expect((await run(['render', 'a.passline', '--bogus'])).err).toMatch(/\(try passline render --help\)\n$/);
+  });
+
+  it('a command name that is only a property of every object is unknown, not a crash', async () => {
+    expect(await run(['constructor'])).toMatchObject({ code: 2, err: 'passline: unknown command "constructor" (try passline --help)\n' });
+    expect((await run(['help', 'toString'])).out).toContain('passline analyze FILE');
+  });
 });
 
 describe('passline simulate', () => {

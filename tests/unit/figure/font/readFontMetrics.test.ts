@@ -4,7 +4,7 @@ import { readFontMetrics } from '../../../../core/figure/font/fontMetrics.ts';
 import { measureText } from '../../../../core/figure/font/measureText.ts';
 import { fontBytes, fontMetrics } from '../fontFixture.ts';
 
-// Reference library: HarfBuzz (harfbuzzjs, installed with subset-font) reads the same
+// Reference library: HarfBuzz (harfbuzzjs, a dependency for font subsetting) reads the same
 // file independently; our advances and em size must match its nominal-glyph advances.
 const face = new hb.Face(new hb.Blob(fontBytes));
 const font = new hb.Font(face);

@@ -9,9 +9,11 @@ import { checkSharedStates } from './sharedStates.ts';
 import { checkCycleClosure } from './cycleClosure.ts';
 import { checkHessMismatch } from './hessMismatch.ts';
 import { checkExothermCaution } from './exothermCaution.ts';
+import { checkCalculations } from './calculationChecks.ts';
 
 const CHECKS: readonly ((input: CheckInput) => Finding[])[] = [
   checkTransitionStates, checkDuplicateLabels, checkMassBalance, checkSharedStates, checkCycleClosure, checkHessMismatch, checkExothermCaution,
+  checkCalculations,
 ];
 
 /** Runs every consistency check on resolved pathways. */

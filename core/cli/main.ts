@@ -9,6 +9,7 @@ import { runRender } from './render.ts';
 import { runScan } from './scan.ts';
 import { runReport, runTables } from './report.ts';
 import { HELP, VERSION } from './help.ts';
+import { runSpecies } from './species.ts';
 
 /** The real terminal and filesystem. */
 export const nodeIo: CliIo = {
@@ -22,7 +23,13 @@ export const nodeIo: CliIo = {
 type Command = (positionals: string[], values: Record<string, string | boolean | string[] | undefined>, io: CliIo) => void | Promise<void>;
 type OptionSpec = { type: 'string' | 'boolean'; multiple?: boolean; short?: string };
 
+// `args` is the exact number of file arguments; -1 means one or more.
 const COMMANDS: Record<string, { options: Record<string, OptionSpec>; run: Command; args: number }> = {
+  species: {
+    options: { json: { type: 'boolean' }, temperature: { type: 'string' }, 'quasi-harmonic': { type: 'string' }, cutoff: { type: 'string' } },
+    args: -1,
+    run: (files, v, io) => runSpecies(files, { json: v.json as boolean | undefined, temperature: v.temperature as string | undefined, quasiHarmonic: v['quasi-harmonic'] as string | undefined, cutoff: v.cutoff as string | undefined }, io),
+  },
   analyze: {
     options: { json: { type: 'boolean' }, unit: { type: 'string' }, temperature: { type: 'string' } },
     args: 1,
@@ -84,7 +91,8 @@ export async function main(argv: string[], io: CliIo = nodeIo): Promise<number> 
       throw new CliError(`${(error as Error).message.split('\n')[0]} (try passline --help)`, EXIT_USAGE);
     }
     if (parsed.values.help) { io.out(HELP); return EXIT_OK; }
-    if (parsed.positionals.length !== command.args) {
+    if (command.args < 0 && parsed.positionals.length === 0) throw new CliError(`${name}: expected one or more file arguments (try passline --help)`, EXIT_USAGE);
+    if (command.args >= 0 && parsed.positionals.length !== command.args) {
       throw new CliError(`${name}: expected ${command.args} file argument${command.args === 1 ? '' : 's'}, got ${parsed.positionals.length} (try passline --help)`, EXIT_USAGE);
     }
     await command.run(parsed.positionals, parsed.values, io);

@@ -53,6 +53,22 @@ export const Structure = z.strictObject({
   gCorrection: finite(' in hartree').optional(),
   /** Harmonic frequencies in cm⁻¹ (imaginary ones negative), when read from an output. */
   frequencies: z.array(finite(' in cm⁻¹')).optional(),
+  /**
+   * What the RRHO corrections were computed from, so that another temperature recomputes
+   * them exactly (with `frequencies`): total mass, principal moments, symmetry number,
+   * multiplicity, standard pressure and the low-mode treatment.
+   */
+  rrho: z.strictObject({
+    massU: positive(' in u'),
+    momentsUA2: z.array(finite(' in u Å²').refine((v) => v >= 0, { message: 'expected a moment of inertia ≥ 0' })).length(3),
+    atomCount: z.int().min(1),
+    symmetryNumber: z.int().min(1),
+    multiplicity: z.int().min(1),
+    pressurePa: positive(' in Pa'),
+    masses: z.string(),
+    quasiHarmonic: z.enum(['off', 'grimme', 'truhlar']),
+    cutoffCm1: positive(' in cm⁻¹'),
+  }).optional(),
   /** The output files behind these numbers and how the corrections were made. */
   source: z.strictObject({ files: z.array(SourceFile).min(1), corrections: z.string().optional() }).optional(),
 });

@@ -39,6 +39,8 @@ const fileWarnings = (f: CalcFile) => [
   ...(f.record.optimisation === 'not-converged' ? [`${f.name}: the optimisation did not converge`] : []),
 ];
 
+const massesOf = (r: CalcRecord): 'standard' | 'isotope' => (r.program === 'orca' ? 'standard' : 'isotope');
+
 function recompute(r: CalcRecord, conditions: CalcConditions, warnings: string[], name: string): RrhoResult | null {
   if (!r.atoms || !r.frequencies) return null;
   if (r.multiplicity === null) { warnings.push(`${name}: no multiplicity, so the corrections cannot be recomputed`); return null; }
@@ -47,7 +49,7 @@ function recompute(r: CalcRecord, conditions: CalcConditions, warnings: string[]
     atoms: r.atoms, frequenciesCm1: r.frequencies, symmetryNumber: r.symmetryNumber ?? 1, multiplicity: r.multiplicity,
     temperatureK: conditions.temperatureK, pressurePa: conditions.pressure === '1atm' ? ATM_PA : BAR_PA,
     // Each program's own default masses, so the recomputed values reproduce its printed ones.
-    masses: r.program === 'orca' ? 'standard' : 'isotope', quasiHarmonic: conditions.quasiHarmonic,
+    masses: massesOf(r), quasiHarmonic: conditions.quasiHarmonic,
   });
   if (!result.ok) { warnings.push(`${name}: ${result.message}; corrections not recomputed`); return null; }
   warnings.push(...result.value.notes.map((n) => `${name}: ${n}`));
@@ -78,6 +80,11 @@ export function speciesFromCalc(pair: CalcPair, id: string, conditions: CalcCond
     structure.gCorrection = fromJoulesPerMol(rrho.gibbs, 'hartree');
     correctionT = conditions.temperatureK;
     how = `recomputed from ${corrections!.name}: ${rrho.method}`;
+    structure.rrho = {
+      ...rrho.geometry, symmetryNumber: c!.symmetryNumber ?? 1, multiplicity: c!.multiplicity!,
+      pressurePa: conditions.pressure === '1atm' ? ATM_PA : BAR_PA, masses: massesOf(c!) === 'isotope' ? 'most abundant isotope' : 'standard atomic weight',
+      quasiHarmonic: conditions.quasiHarmonic.method, cutoffCm1: conditions.quasiHarmonic.cutoffCm1,
+    };
   } else if (c?.thermo && c.thermo.hCorrection !== null && c.thermo.gCorrection !== null) {
     structure.hCorrection = c.thermo.hCorrection;
     structure.gCorrection = c.thermo.gCorrection;

@@ -34,6 +34,8 @@ export interface RrhoResult {
   parts: { translation: RrhoPart; rotation: RrhoPart; vibration: RrhoPart; electronic: RrhoPart };
   /** How it was computed, in one sentence. */
   method: string;
+  /** The geometry as the terms used it (what a document keeps to recompute at another T). */
+  geometry: { massU: number; momentsUA2: [number, number, number]; atomCount: number };
   notes: string[];
 }
 
@@ -50,33 +52,50 @@ const cm1ToKelvin = (cm1: number) => (PLANCK * SPEED_OF_LIGHT * 100 * cm1) / BOL
  * element has no mass in the table.
  */
 export function rrhoThermo(input: RrhoInput): { ok: true; value: RrhoResult } | { ok: false; message: string } {
-  const { temperatureK: t, quasiHarmonic: qh } = input;
-  const rt = GAS_CONSTANT * t;
   const points = [];
   for (const a of input.atoms) {
     const mass = atomicMass(a.symbol, input.masses);
     if (mass === null) return { ok: false, message: `no atomic mass for ${a.symbol}` };
     points.push({ mass, x: a.x, y: a.y, z: a.z });
   }
+  const { atoms: _atoms, masses, ...rest } = input;
+  const massLabel = masses === 'isotope' ? 'most abundant isotope' : 'standard atomic weight';
+  return { ok: true, value: rrhoFromMoments({ ...rest, massU: points.reduce((s, p) => s + p.mass, 0), momentsUA2: principalMoments(points), atomCount: points.length, massLabel }) };
+}
+
+/** What {@link rrhoFromMoments} needs: the geometry reduced to its total mass and principal moments. */
+export interface RrhoMomentsInput extends Omit<RrhoInput, 'atoms' | 'masses'> {
+  massU: number;
+  /** Principal moments of inertia, u Å², ascending. */
+  momentsUA2: readonly [number, number, number];
+  atomCount: number;
+  /** Which masses, for the provenance sentence. */
+  massLabel: string;
+}
+
+/** {@link rrhoThermo} from the total mass and principal moments (what a document keeps to recompute at another T). */
+export function rrhoFromMoments(input: RrhoMomentsInput): RrhoResult {
+  const { temperatureK: t, quasiHarmonic: qh } = input;
+  const rt = GAS_CONSTANT * t;
   const notes: string[] = [];
-  const massKg = points.reduce((s, p) => s + p.mass, 0) * ATOMIC_MASS_KG;
+  const massKg = input.massU * ATOMIC_MASS_KG;
   const lambda = (2 * Math.PI * massKg * BOLTZMANN * t) / PLANCK ** 2;
   const translation = { entropy: GAS_CONSTANT * (Math.log(lambda ** 1.5 * (BOLTZMANN * t) / input.pressurePa) + 2.5), energy: 1.5 * rt };
-  const moments = principalMoments(points);
+  const moments = input.momentsUA2;
   const theta = moments.map((i) => PLANCK ** 2 / (8 * Math.PI ** 2 * i * ATOMIC_MASS_KG * ANGSTROM ** 2 * BOLTZMANN));
   const sigma = input.symmetryNumber;
   let rotation: RrhoPart;
   let expected: number;
-  if (points.length === 1) {
+  if (input.atomCount === 1) {
     rotation = { entropy: 0, energy: 0 };
     expected = 0;
   } else if (moments[0] < 1e-6 * moments[2]) {
     rotation = { entropy: GAS_CONSTANT * (Math.log(t / (sigma * theta[2]!)) + 1), energy: rt };
-    expected = 3 * points.length - 5;
+    expected = 3 * input.atomCount - 5;
   } else {
     const q = (Math.sqrt(Math.PI) / sigma) * t ** 1.5 / Math.sqrt(theta[0]! * theta[1]! * theta[2]!);
     rotation = { entropy: GAS_CONSTANT * (Math.log(q) + 1.5), energy: 1.5 * rt };
-    expected = 3 * points.length - 6;
+    expected = 3 * input.atomCount - 6;
   }
   const real = input.frequenciesCm1.filter((f) => f > 0);
   const imaginary = input.frequenciesCm1.length - real.length;
@@ -99,12 +118,10 @@ export function rrhoThermo(input: RrhoInput): { ok: true; value: RrhoResult } | 
     : qh.method === 'grimme' ? `Grimme's quasi-RRHO entropy below ${qh.cutoffCm1} cm⁻¹ (Chem. Eur. J. 18, 9955 (2012))`
       : `Truhlar's quasi-harmonic raise of ${raised} mode${raised === 1 ? '' : 's'} to ${qh.cutoffCm1} cm⁻¹ (J. Phys. Chem. B 115, 14556 (2011))`;
   return {
-    ok: true,
-    value: {
-      zpe, thermalEnergy, enthalpy, entropy, gibbs: enthalpy - t * entropy,
-      parts: { translation, rotation, vibration: { entropy: vibEntropy, energy: vibEnergy }, electronic },
-      method: `RRHO at ${t} K and ${input.pressurePa} Pa, σ = ${sigma}, ${input.masses === 'isotope' ? 'most abundant isotope' : 'standard atomic weight'} masses, ${low}`,
-      notes,
-    },
+    zpe, thermalEnergy, enthalpy, entropy, gibbs: enthalpy - t * entropy,
+    parts: { translation, rotation, vibration: { entropy: vibEntropy, energy: vibEnergy }, electronic },
+    method: `RRHO at ${t} K and ${input.pressurePa} Pa, σ = ${sigma}, ${input.massLabel} masses, ${low}`,
+    geometry: { massU: input.massU, momentsUA2: [...moments] as [number, number, number], atomCount: input.atomCount },
+    notes,
   };
 }

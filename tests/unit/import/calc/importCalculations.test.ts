@@ -67,3 +67,27 @@ describe('importCalculations', () => {
     expect(result.candidates.map((c) => c.species.id)).toEqual(['dvb-2', 'geom']);
   });
 });
+
+describe('corrections at another temperature', () => {
+  it('are recomputed exactly from the stored frequencies when the document temperature changes', async () => {
+    const { makeDocument } = await import('../../../../core/model/load.ts');
+    const { resolveProfile } = await import('../../../../core/profile/resolve.ts');
+    const at298 = importCalculations([{ name: 'dvb.log', text: FREQ }], AT_298).candidates[0]!.species;
+    const at400 = importCalculations([{ name: 'dvb.log', text: FREQ }], { ...AT_298, temperatureK: 400 }).candidates[0]!.species;
+    // The absolute G is read as the energy relative to a reference species with G = 0. H − T·S from the
+    // 298.15 K corrections would miss it by about 1 millihartree for this molecule at 400 K.
+    const zero = { id: 'zero', label: 'zero', structures: [{ electronic: 0, hCorrection: 0, gCorrection: 0 }] };
+    const doc = (t: number) => makeDocument({
+      settings: { temperatureK: t, quantity: 'G', unit: 'hartree' }, species: [zero, at298],
+      pathways: [{ id: 'a', name: 'A', points: [
+        { id: 'r', label: 'r', kind: 'min', energy: { mode: 'species', terms: [{ species: 'zero', count: 1 }] } },
+        { id: 'p', label: 'p', kind: 'min', energy: { mode: 'species', terms: [{ species: 'dvb', count: 1 }] } },
+      ] }],
+    });
+    const g = (t: number) => resolveProfile(doc(t)).pathways[0]!.points[1]!;
+    const expected = at400.structures[0]!.electronic + at400.structures[0]!.gCorrection!;
+    const p400 = g(400);
+    expect(p400.energyJ! / (4.3597447222071e-18 * 6.02214076e23)).toBeCloseTo(expected, 9);
+    expect(p400.provenance.approximations.join(' ')).not.toMatch(/H − T·S|rescal/i);
+  });
+});

@@ -1,3 +1,4 @@
+import { uniqueId } from '../../edit/uniqueId.ts';
 import { readCalculation } from './readCalculation.ts';
 import { pairCalcFiles, speciesKey, type CalcFile } from './pairCalcFiles.ts';
 import { speciesFromCalc, type CalcConditions, type SpeciesCandidate } from './speciesFromCalc.ts';
@@ -9,14 +10,6 @@ export interface CalcImport {
   errors: string[];
   /** True when nothing blocks adding all candidates (all or nothing). */
   ok: boolean;
-}
-
-function uniqueId(base: string, taken: Set<string>): string {
-  const clean = base.replace(/[^A-Za-z0-9_-]+/g, '-').replace(/^-+|-+$/g, '') || 'species';
-  let id = clean;
-  for (let n = 2; taken.has(id); n++) id = `${clean}-${n}`;
-  taken.add(id);
-  return id;
 }
 
 /**
@@ -32,8 +25,12 @@ export function importCalculations(files: readonly { name: string; text: string 
     if (result.ok) read.push({ name: f.name, record: result.record });
     else errors.push(result.message);
   }
-  const taken = new Set(existingIds);
-  const candidates = pairCalcFiles(read).map((pair) => speciesFromCalc(pair, uniqueId(speciesKey(pair.energy.name), taken), conditions));
+  const taken = [...existingIds];
+  const candidates = pairCalcFiles(read).map((pair) => {
+    const id = uniqueId(speciesKey(pair.energy.name), taken);
+    taken.push(id);
+    return speciesFromCalc(pair, id, conditions);
+  });
   for (const c of candidates) errors.push(...c.errors);
   if (files.length === 0) errors.push('no files given');
   return { candidates, errors, ok: errors.length === 0 };

@@ -32,8 +32,8 @@ function readOrientation(lines: string[], title: number): { atoms: CalcAtom[]; e
 }
 
 /**
- * Reads a Gaussian log (Gaussian 09/16): the last job step's result counts. Final SCF
- * energy and its method line, charge and multiplicity, the last standard (else input)
+ * Reads a Gaussian log (Gaussian 09/16): the last job step's result counts. Final energy
+ * (SCF, or MP2 / CCSD(T) when printed after it) and its method line, charge and multiplicity, the last standard (else input)
  * orientation, harmonic frequencies, the printed thermochemistry, the rotational symmetry
  * number, termination and whether an optimisation converged. Pure: text in, record out.
  */
@@ -71,6 +71,12 @@ export function readGaussianLog(text: string): CalcRecord {
     if ((m = /SCF Done:\s+(E\([^)]+\))\s*=\s*(\S+)/.exec(line))) {
       const value = fortranNumber(m[2]);
       if (value !== null) energy = { value, label: m[1]! };
+      continue;
+    }
+    // Correlated energies follow the SCF of the same step; the last one printed is the method's result.
+    if ((m = /EUMP2 =\s*(\S+)/.exec(line)) || (m = /^\s*CCSD\(T\)=\s*(\S+)/.exec(line))) {
+      const value = fortranNumber(m[1]);
+      if (value !== null) energy = { value, label: line.includes('EUMP2') ? 'MP2' : 'CCSD(T)' };
       continue;
     }
     if ((m = /Charge =\s*(-?\d+) Multiplicity =\s*(\d+)/.exec(line))) { charge = Number(m[1]); multiplicity = Number(m[2]); continue; }

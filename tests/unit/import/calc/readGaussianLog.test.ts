@@ -78,3 +78,21 @@ describe('readGaussianLog', () => {
     expect(r.missing).toContain('final electronic energy (no "SCF Done" line)');
   });
 });
+
+describe('readGaussianLog, correlated single point', () => {
+  // Excerpt of cclib's data/Gaussian/basicGaussian16/water_ccsdt.log (water, CCSD(T)/STO-3G).
+  it('takes the CCSD(T) energy, not the SCF or MP2 one printed before it', () => {
+    const r = readGaussianLog(qcFixture('g16-water-ccsdt.log'));
+    expect(r).toMatchObject({ method: 'CCSD(T)/STO-3G', energyLabel: 'CCSD(T)', formula: 'H2O', frequencies: null, termination: 'normal', optimisation: 'none' });
+    expect(r.energyHartree).toBeCloseTo(-75.017760422, 12);
+    expect(r.missing).toEqual(['harmonic frequencies', 'thermochemistry']);
+  });
+
+  it('takes MP2 when the run stops after it', () => {
+    const text = qcFixture('g16-water-ccsdt.log');
+    const r = readGaussianLog(text.slice(0, text.indexOf(' E3=')));
+    expect(r.energyLabel).toBe('MP2');
+    expect(r.energyHartree).toBeCloseTo(-75.002282127453, 12);
+    expect(r.termination).toBe('truncated');
+  });
+});

@@ -46,3 +46,12 @@ describe('readOrcaOutput', () => {
     expect(r.method).toBe('b3lyp sto-3g');
   });
 });
+
+describe('readOrcaOutput, optimisation', () => {
+  it('reads an optimisation whose convergence banner is printed as converged', () => {
+    // ORCA's banner as quoted from real output in public ORCA tutorials (wording checked, not invented).
+    const banner = '                    ***********************HURRAY********************\n                    ***        THE OPTIMIZATION HAS CONVERGED     ***\n                    *************************************************\n';
+    const opt = OUT.replace('!  b3lyp sto-3g usesym freq', '!  b3lyp sto-3g opt freq').replace('---------------------------------\nCARTESIAN COORDINATES (ANGSTROEM)', `${banner}\n---------------------------------\nCARTESIAN COORDINATES (ANGSTROEM)`);
+    expect(readOrcaOutput(opt).optimisation).toBe('converged');
+  });
+});

@@ -50,6 +50,14 @@ export const COMMAND_HELP: Record<string, string> = {
       Rate constants, equilibrium constants, TOFs and product shares over a temperature
       range (default 273.15–373.15 K, 11 values) as CSV; states how G(T) was obtained.
 `,
+  species: `  passline species FILE... [--json] [--temperature K] [--quasi-harmonic grimme|truhlar|off] [--cutoff CM1]
+      Read Gaussian logs, ORCA outputs and XYZ files (one species per file, or a
+      single point NAME_sp.* with its frequency file NAME_freq.*: E from the first,
+      corrections from the second) and print E, the thermal corrections recomputed
+      from the frequencies at K (default 298.15, 1 atm), imaginary counts and what
+      each file lacks. Low modes: harmonic (off, default), Grimme's entropy
+      interpolation or Truhlar's raise, below CM1 (default 100 cm⁻¹).
+`,
 };
 
 const EXIT_STATUS = 'Exit status: 0 success, 1 bad input (the message names the file, field or row), 2 bad usage.\n';

@@ -25,6 +25,11 @@ type OptionSpec = { type: 'string' | 'boolean'; multiple?: boolean; short?: stri
  * Its help text is the entry of the same name in COMMAND_HELP (help.ts).
  */
 const COMMANDS: Record<string, { options: Record<string, OptionSpec>; run: Command; args: number | 'many' }> = {
+  species: {
+    options: { json: { type: 'boolean' }, temperature: { type: 'string' }, 'quasi-harmonic': { type: 'string' }, cutoff: { type: 'string' } },
+    args: 'many',
+    run: async (files, v, io) => (await import('./species.ts')).runSpecies(files, { json: v.json as boolean | undefined, temperature: v.temperature as string | undefined, quasiHarmonic: v['quasi-harmonic'] as string | undefined, cutoff: v.cutoff as string | undefined }, io),
+  },
   analyze: {
     options: { json: { type: 'boolean' }, unit: { type: 'string' }, temperature: { type: 'string' }, strict: { type: 'boolean' } },
     args: 1,

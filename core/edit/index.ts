@@ -13,3 +13,4 @@ export { editRateData, MIN_RATE_ROWS, type RateRow, type RateDataEdit } from './
 export { addAnnotation, removeAnnotation, annotationProblem, type Annotation } from './annotationEdits.ts';
 export { addConformer, duplicateConformer, deleteConformer, canDeleteConformer, setConformerCell, pasteConformers, writeConformerRows, type ConformerEdit, type ConformerRef } from './conformerEdits.ts';
 export { CONFORMER_COLUMNS, conformerRow, conformerColumnByName, structureFromRow, type ConformerColumn, type ConformerColumnKey, type ConformerError, type ConformerRow } from './conformerColumns.ts';
+export { addImportedSpecies, type ImportedSpeciesArgs } from './importedSpecies.ts';

@@ -50,6 +50,8 @@ export const BOUNDS = {
   coordinate: bound('coordinate', '', [-10_000, 10_000], [-1_000, 1_000]),
   /** Species count in a state. */
   count: bound('count', '', [1e-6, 1_000], [1, 100]),
+  /** Cut-off of a quasi-harmonic low-mode treatment (100 cm⁻¹ is common practice). */
+  lowModeCutoffCm1: bound('quasi-harmonic cut-off', 'cm⁻¹', [1, 1_000], [50, 200]),
   /** Concentration, mol/L. */
   concentration: bound('concentration', 'mol/L', [0, 1e4], [1e-9, 100]),
   /** Net charge of a species, in elementary charges. */

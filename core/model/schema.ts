@@ -28,6 +28,17 @@ export const SpeciesTerm = z.strictObject({
   count: bounded('count'),
 });
 
+/** One calculation output a structure's numbers were read from. */
+export const SourceFile = z.strictObject({
+  file: z.string().min(1),
+  /** What was taken from it: the electronic energy, the thermal corrections, or both. */
+  role: z.enum(['energy', 'corrections', 'energy+corrections', 'geometry']),
+  program: z.string(),
+  method: z.string().optional(),
+  termination: z.enum(['normal', 'abnormal', 'truncated']),
+  optimisation: z.enum(['converged', 'not-converged', 'none']),
+});
+
 /** Absolute energies of one structure, in hartree. */
 export const Structure = z.strictObject({
   label: boundedText().optional(),
@@ -35,6 +46,26 @@ export const Structure = z.strictObject({
   singlePoint: bounded('absoluteEnergyHartree', ' in hartree').optional(),
   hCorrection: bounded('correctionHartree', ' in hartree').optional(),
   gCorrection: bounded('correctionHartree', ' in hartree').optional(),
+  /** Harmonic frequencies in cm⁻¹ (imaginary ones negative), when read from an output. */
+  frequencies: z.array(finite(' in cm⁻¹')).optional(),
+  /**
+   * What the RRHO corrections were computed from, so that another temperature recomputes
+   * them exactly (with `frequencies`): total mass, principal moments, symmetry number,
+   * multiplicity, standard pressure and the low-mode treatment.
+   */
+  rrho: z.strictObject({
+    massU: positive(' in u'),
+    momentsUA2: z.array(finite(' in u Å²').refine((v) => v >= 0, { message: 'expected a moment of inertia ≥ 0' })).length(3),
+    atomCount: z.int().min(1),
+    symmetryNumber: z.int().min(1),
+    multiplicity: z.int().min(1),
+    pressurePa: positive(' in Pa'),
+    masses: boundedText(),
+    quasiHarmonic: z.enum(['off', 'grimme', 'truhlar']),
+    cutoffCm1: positive(' in cm⁻¹'),
+  }).optional(),
+  /** The output files behind these numbers and how the corrections were made. */
+  source: z.strictObject({ files: z.array(SourceFile).min(1), corrections: z.string().optional() }).optional(),
 });
 
 export const Species = z.strictObject({
@@ -42,6 +73,8 @@ export const Species = z.strictObject({
   label: boundedText(),
   formula: boundedText().optional(),
   charge: bounded('charge').optional(),
+  /** Spin multiplicity 2S + 1, when read from a calculation output. */
+  multiplicity: z.int().min(1).optional(),
   /** How this species enters a standard-state correction. */
   phase: z.enum(['solute', 'solvent', 'gas', 'none']).default('solute'),
   /** Molar concentration of the neat liquid (mol/L) when phase is 'solvent'. */
@@ -179,6 +212,7 @@ export type Quantity = z.infer<typeof Quantity>;
 export type PointKind = z.infer<typeof PointKind>;
 export type SpeciesTerm = z.infer<typeof SpeciesTerm>;
 export type Structure = z.infer<typeof Structure>;
+export type SourceFile = z.infer<typeof SourceFile>;
 export type Species = z.infer<typeof Species>;
 export type Estimate = z.infer<typeof Estimate>;
 export type EnergySpec = z.infer<typeof EnergySpec>;

@@ -1,5 +1,6 @@
 import type { Quantity, Species, Structure } from '../model/schema.ts';
 import { toJoulesPerMol } from '../units/energy.ts';
+import { rrhoCorrectionsAt } from './rrhoCorrections.ts';
 
 /** Temperature assumed for thermal corrections when a species does not say (the usual default of quantum-chemistry programs). */
 export const DEFAULT_CORRECTION_T = 298.15;
@@ -7,14 +8,22 @@ export const DEFAULT_CORRECTION_T = 298.15;
 /**
  * One conformer's energy in the profile's quantity, hartree: E (or its single point) plus the
  * thermal correction to H or G, or why it cannot be had. G away from the corrections'
- * temperature T0 is G(T) ≈ H − T·S with S = (H − G)/T0 (H and S held at T0).
+ * temperature T0 is recomputed exactly when the structure carries its frequencies and RRHO
+ * data; otherwise G(T) ≈ H − T·S with S = (H − G)/T0 (H and S held at T0).
  */
 export function structureEnergyHartree(s: Structure, quantity: Quantity, t: number, t0: number): { value: number; rescaled: boolean } | string {
   const base = s.singlePoint ?? s.electronic;
   if (quantity === 'E') return { value: base, rescaled: false };
-  if (quantity === 'H') return s.hCorrection === undefined ? 'no thermal correction to H' : { value: base + s.hCorrection, rescaled: false };
+  if (quantity === 'H') {
+    if (s.hCorrection === undefined) return 'no thermal correction to H';
+    const exactH = Math.abs(t - t0) < 1e-9 ? null : rrhoCorrectionsAt(s, t);
+    return { value: base + (exactH?.h ?? s.hCorrection), rescaled: false };
+  }
   if (s.gCorrection === undefined) return 'no thermal correction to G';
   if (Math.abs(t - t0) < 1e-9 || s.hCorrection === undefined) return { value: base + s.gCorrection, rescaled: false };
+  // Frequencies and RRHO data on the structure: G at t exactly, not H − T·S.
+  const exact = rrhoCorrectionsAt(s, t);
+  if (exact) return { value: base + exact.g, rescaled: false };
   const entropyTerm = (s.hCorrection - s.gCorrection) / t0;
   return { value: base + s.hCorrection - t * entropyTerm, rescaled: true };
 }

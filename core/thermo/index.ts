@@ -24,3 +24,7 @@ export * from './estimates/linearFit.ts';
 export * from './estimates/ratePoints.ts';
 export * from './estimates/eyringFit.ts';
 export * from './estimates/arrhenius.ts';
+export * from './rrho/atomicMasses.ts';
+export * from './rrho/principalMoments.ts';
+export * from './rrho/quasiHarmonic.ts';
+export * from './rrho/rrhoThermo.ts';

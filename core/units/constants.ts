@@ -14,3 +14,5 @@ export const GAS_CONSTANT = AVOGADRO * BOLTZMANN;
 export const CALORIE_J = 4.184;
 export const ATM_PA = 101325;
 export const BAR_PA = 100000;
+/** Atomic mass constant m_u in kg, CODATA 2018. */
+export const ATOMIC_MASS_KG = 1.6605390666e-27;

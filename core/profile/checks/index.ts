@@ -10,9 +10,11 @@ import { checkCycleClosure } from './cycleClosure.ts';
 import { checkHessMismatch } from './hessMismatch.ts';
 import { checkExothermCaution } from './exothermCaution.ts';
 import { checkEmptyLabels } from './emptyLabels.ts';
+import { checkCalculations } from './calculationChecks.ts';
 
 const CHECKS: readonly ((input: CheckInput) => Finding[])[] = [
   checkTransitionStates, checkDuplicateLabels, checkMassBalance, checkSharedStates, checkCycleClosure, checkHessMismatch, checkExothermCaution, checkEmptyLabels,
+  checkCalculations,
 ];
 
 /** Runs every consistency check on resolved pathways. */

@@ -44,6 +44,8 @@ export const BOUNDS = {
   linePt: bound('line width', 'pt', [0.05, 20], [0.2, 4]),
   /** Position of a point along the reaction coordinate (slot units). */
   coordinate: bound('coordinate', '', [-10_000, 10_000], [-1_000, 1_000]),
+  /** Net charge of a molecule, in elementary charges. */
+  charge: bound('charge', 'e', [-20, 20], [-4, 4]),
   /** Species count in a state. */
   count: bound('count', '', [1e-6, 1_000], [1, 100]),
   /** Concentration, mol/L. */

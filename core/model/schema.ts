@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { ENERGY_UNITS } from '../units/energy.ts';
+import { BOUNDS, outsideHard } from './bounds.ts';
 
 /**
  * The Passline document, format version 1. A `.passline` file is this object as JSON.
@@ -42,6 +43,23 @@ export const Structure = z.strictObject({
   gCorrection: finite(' in hartree').optional(),
 });
 
+/**
+ * A molecule's structure as the user gave it: a SMILES string, an MDL molfile, or an XYZ
+ * geometry (bonds perceived from interatomic distances). Formula and charge derive from it;
+ * the figure draws it beside the level.
+ */
+export const Molecule = z.strictObject({
+  format: z.enum(['smiles', 'molfile', 'xyz'], { error: (i) => `expected a structure format (smiles, molfile, xyz), got ${describe(i.input)}` }),
+  text: z.string().trim().min(1, 'expected a structure (SMILES, molfile or XYZ text)').max(1_000_000, 'expected a structure under 1 000 000 characters'),
+  /** Net charge of an XYZ geometry (XYZ has none); SMILES and molfiles carry their own. */
+  charge: z.int().min(BOUNDS.charge.hard[0]).max(BOUNDS.charge.hard[1]).optional(),
+  /**
+   * Forming and breaking bonds of a transition state, each as the two atom map numbers
+   * (SMILES `[C:2]`, the molfile's mapping column) of a bond in the structure: drawn dashed.
+   */
+  partialBonds: z.array(z.tuple([z.int().min(1), z.int().min(1)])).max(50).optional(),
+});
+
 export const Species = z.strictObject({
   id: z.string().min(1, 'expected a non-empty id'),
   label: z.string(),
@@ -55,6 +73,8 @@ export const Species = z.strictObject({
   correctionTemperatureK: positive(' in K').optional(),
   /** One structure, or several conformers that are Boltzmann-weighted. */
   structures: z.array(Structure).default([]),
+  /** The species' molecule: its formula and charge then come from it. */
+  molecule: Molecule.optional(),
   formation: z.strictObject({
     dfH: finite(' in kJ/mol').optional(),
     S: finite(' in J/(mol K)').optional(),
@@ -98,6 +118,10 @@ export const Point = z.strictObject({
   x: finite('').optional(),
   barWidthMm: positive(' in mm').optional(),
   labelOffsetMm: z.strictObject({ dx: finite(' in mm'), dy: finite(' in mm') }).optional(),
+  /** A molecule drawn at this point (wins over its species' molecules). */
+  molecule: Molecule.optional(),
+  /** Which side of the level this point's drawing goes (overrides the figure's choice). */
+  moleculeSide: z.enum(['above', 'below']).optional(),
 });
 
 export const PathwayStyle = z.strictObject({
@@ -142,6 +166,12 @@ export const Figure = z.strictObject({
   showLegend: z.boolean().default(true),
   daggerOnTs: z.boolean().default(true),
   energyFormat: z.enum(['plain', 'parentheses', 'withUnit']).default('plain'),
+  /** Molecule drawings beside the levels: shown or not, which side, largest side in mm. */
+  molecules: z.strictObject({
+    show: z.boolean().default(true),
+    side: z.enum(['above', 'below']).default('above'),
+    sizeMm: positive(' in mm').refine((v) => outsideHard('lengthMm', v) === null, { message: `expected a drawing size up to ${BOUNDS.lengthMm.hard[1]} mm` }).optional(),
+  }).optional(),
   annotations: z.array(z.discriminatedUnion('type', [
     z.strictObject({ type: z.literal('barrier'), pathway: z.string(), from: z.string(), to: z.string() }),
     z.strictObject({ type: z.literal('span'), pathway: z.string() }),
@@ -171,6 +201,7 @@ export type Quantity = z.infer<typeof Quantity>;
 export type PointKind = z.infer<typeof PointKind>;
 export type SpeciesTerm = z.infer<typeof SpeciesTerm>;
 export type Structure = z.infer<typeof Structure>;
+export type Molecule = z.infer<typeof Molecule>;
 export type Species = z.infer<typeof Species>;
 export type Estimate = z.infer<typeof Estimate>;
 export type EnergySpec = z.infer<typeof EnergySpec>;

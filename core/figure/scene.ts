@@ -21,7 +21,7 @@ export interface Stroke {
 /** What a primitive stands for, so the canvas can pick and style it. */
 export type Role =
   | 'background' | 'level' | 'connector' | 'axis' | 'tick' | 'arrow'
-  | 'legend' | 'leader' | 'label' | 'annotation' | 'title';
+  | 'legend' | 'leader' | 'label' | 'annotation' | 'title' | 'structure';
 
 /** A stroked and/or filled path. */
 export interface PathItem {
@@ -32,6 +32,8 @@ export interface PathItem {
   fill?: string;
   pathway?: string;
   point?: string;
+  /** Name of the group the item belongs to (a molecule drawing); consecutive items share it. */
+  group?: string;
 }
 
 /** A run of text at one size, offset from its item's anchor (baseline, left end). */
@@ -64,6 +66,8 @@ export interface TextItem {
   box: Box;
   pathway?: string;
   point?: string;
+  /** As on PathItem. */
+  group?: string;
 }
 
 export type SceneItem = PathItem | TextItem;
@@ -76,9 +80,11 @@ export type SceneItem = PathItem | TextItem;
  *   state shared by several pathways, labelled once, is listed once, under the first.
  * - `annotation`: the label of a barrier arrow or span bracket; `annotation` indexes
  *   `doc.figure.annotations` (from 0), `text` is the label's text (e.g. "ΔG‡ = 14.2").
+ * - `structure`: the molecule drawing of a level, named like a level's label.
  */
 export type OmittedLabel =
   | { kind: 'level'; pathway: string; point: string; pathwayName: string; label: string }
+  | { kind: 'structure'; pathway: string; point: string; pathwayName: string; label: string }
   | { kind: 'annotation'; annotation: number; pathway: string; pathwayName: string; text: string };
 
 /** A complete figure. */

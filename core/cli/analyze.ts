@@ -1,4 +1,5 @@
 import { analyseDocument } from '../analysis/analyseDocument.ts';
+import { documentStructures } from './documentStructures.ts';
 import type { CliIo } from './io.ts';
 import { loadInput } from './loadInput.ts';
 import { applySettingOptions } from './options.ts';
@@ -11,9 +12,12 @@ export interface AnalyzeOptions {
   temperature?: string | undefined;
 }
 
-/** `passline analyze FILE`: resolves the profile and prints points, analysis and findings. */
-export function runAnalyze(file: string, options: AnalyzeOptions, io: CliIo): void {
+/**
+ * `passline analyze FILE`: resolves the profile and prints points, analysis and findings
+ * (formulas and charges from the species' structures, where they have any).
+ */
+export async function runAnalyze(file: string, options: AnalyzeOptions, io: CliIo): Promise<void> {
   const doc = applySettingOptions(loadInput(file, io), options);
-  const report = analysisReport(doc, analyseDocument(doc));
+  const report = analysisReport(doc, analyseDocument(doc, await documentStructures(doc)));
   io.out(options.json ? `${JSON.stringify(report, null, 2)}\n` : analysisText(report));
 }

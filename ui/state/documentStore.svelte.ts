@@ -2,6 +2,9 @@ import { parseDocument, serializeDocument, type DocumentError } from '../../core
 import type { Document } from '../../core/model/schema.ts';
 import { analyseDocument, type DocumentAnalysis } from '../../core/analysis/analyseDocument.ts';
 import type { ResolvedProfile } from '../../core/profile/types.ts';
+import { pointDepictions, type PointDrawing } from '../../core/structure/pointDepictions.ts';
+import { hasStructures, readStructures, type StructureTable } from '../../core/structure/readStructures.ts';
+import type { StructureToolkit } from '../../core/structure/structureToolkit.ts';
 import { closeGroup, record, redo, startHistory, undo, type History, type RecordOptions } from '../../core/edit/history.ts';
 import { DOCUMENT_EXTENSION, type ExportRequest, type HostApi } from '../host/hostApi.ts';
 import { suggestFileName } from './suggestFileName.ts';
@@ -41,6 +44,14 @@ export class DocumentStore {
   /** The document resolved by core: energies in J/mol with provenance, and findings. */
   readonly profile: ResolvedProfile;
   readonly dirty: boolean;
+  /** The structure toolkit once loaded (on first meeting a structure, never at start-up). */
+  toolkit: StructureToolkit | null = $state.raw(null);
+  /** Why the toolkit could not be loaded, for the user. */
+  toolkitProblem = $state('');
+  /** The document's structures as read by the toolkit (null before it loads or without structures). */
+  readonly structures: StructureTable | null;
+  /** Molecule drawings for the figure, by point. */
+  readonly drawings: ReadonlyMap<string, PointDrawing> | undefined;
   readonly #host: HostApi;
 
   constructor(host: HostApi, initial: Document, fileName: string) {
@@ -49,9 +60,23 @@ export class DocumentStore {
     this.saved = $state.raw<Document | null>(initial);
     this.fileName = $state(fileName);
     this.doc = $derived(this.history.present);
-    this.analysis = $derived(analyseDocument(this.doc));
+    this.structures = $derived(this.toolkit && hasStructures(this.doc) ? readStructures(this.doc, this.toolkit) : null);
+    this.drawings = $derived(this.structures ? pointDepictions(this.doc, this.structures) : undefined);
+    this.analysis = $derived(analyseDocument(this.doc, this.structures));
     this.profile = $derived(this.analysis.profile);
     this.dirty = $derived(this.doc !== this.saved);
+  }
+
+  /** Loads the structure toolkit if the document needs it (a separate chunk, fetched once). */
+  async needToolkit(): Promise<void> {
+    if (this.toolkit || !hasStructures(this.doc)) return;
+    try {
+      const { loadStructureToolkit } = await import('../../core/structure/loadStructureToolkit.ts');
+      this.toolkit = await loadStructureToolkit();
+      this.toolkitProblem = '';
+    } catch (error) {
+      this.toolkitProblem = `Structures cannot be drawn: the structure toolkit did not load (${error instanceof Error ? error.message : String(error)}).`;
+    }
   }
 
   /** Records the result of an edit; an edit that changed nothing leaves history alone. */

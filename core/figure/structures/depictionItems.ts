@@ -100,7 +100,7 @@ function doubleSide(d: Depiction, from: number, to: number): number {
 const SUB = 0.7;
 const superscript = (q: number) => `${Math.abs(q) === 1 ? '' : Math.abs(q)}${q > 0 ? '+' : '−'}`;
 
-/** A label with its element symbol centred on the atom; hydrogens on the side away from the bonds. */
+/** A label with its element symbol centred on the atom; hydrogens and charge on the side away from the bonds. */
 function atomLabel(d: Depiction, i: number, p: { x: number; y: number }, style: DepictionStyle): { item: TextItem; clip: number } {
   const a = d.atoms[i]!;
   const size = style.labelMm, small = SUB * size, m = style.metrics;
@@ -114,8 +114,9 @@ function atomLabel(d: Depiction, i: number, p: { x: number; y: number }, style: 
     : [];
   const symbol = { text: a.element, size, dy: 0 };
   const charge = a.charge !== 0 ? [{ text: superscript(a.charge), size: small, dy: -0.45 * size }] : [];
-  const hLeft = pull > 1e-6 && hRuns.length > 0;
-  const parts = hLeft ? [...hRuns, symbol, ...charge] : [symbol, ...hRuns, ...charge];
+  // Hydrogens and charge go on the side away from the bonds, so no bond runs through them.
+  const left = pull > 1e-6;
+  const parts = left ? [...charge, ...hRuns, symbol] : [symbol, ...hRuns, ...charge];
   const runs: TextRun[] = [];
   let dx = 0, symbolLeft = 0;
   for (const part of parts) {

@@ -7,6 +7,8 @@ import { withStructureFormulas } from '../../../core/structure/withStructureForm
 import { onePathway, species, state } from '../profile/builders.ts';
 
 const toolkit = await loadStructureToolkit();
+// OpenChemLib's first layout is slow (it starts its templates): do it before the timed tests.
+toolkit.read({ format: 'smiles', text: 'c1ccccc1' });
 const smiles = (text: string) => ({ format: 'smiles' as const, text });
 
 // Invented scenario: ester hydrolysis by hydroxide, CH3COOCH3 + OH⁻ → CH3COO⁻ + CH3OH

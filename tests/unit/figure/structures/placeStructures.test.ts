@@ -14,6 +14,8 @@ import { manyStructuresDocument, structuresDocument } from '../../../fixtures/st
 import { fontMetrics } from '../fontFixture.ts';
 
 const toolkit = await loadStructureToolkit();
+// OpenChemLib's first layout is slow (it starts its templates): do it before the timed tests.
+toolkit.read({ format: 'smiles', text: 'c1ccccc1' });
 const metrics = fontMetrics();
 
 function layout(doc: Document, options: Partial<Parameters<typeof layoutFigure>[2]> = {}): Scene {

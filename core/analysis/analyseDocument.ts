@@ -8,6 +8,9 @@ import { energeticSpan, type EnergeticSpan } from '../kinetics/energeticSpan.ts'
 import { compareBarriers, competingPathways, type BarrierComparison, type CompetingPathways } from '../kinetics/compare.ts';
 import { molecularityFromCompositions } from './molecularity.ts';
 import { formatScientific } from '../format/formatScientific.ts';
+import type { StructureTable } from '../structure/readStructures.ts';
+import { structureFindings } from '../structure/structureFindings.ts';
+import { withStructureFormulas } from '../structure/withStructureFormulas.ts';
 
 /** Kinetic reading of one pathway. */
 export interface PathwayAnalysis {
@@ -72,10 +75,14 @@ function fasterThanDiffusion({ pathway, steps }: PathwayAnalysis): Finding[] {
 /**
  * Resolves a document and analyses every pathway: steps with Eyring rates (molecularity
  * from compositions where known), the effective barrier, the energetic span of cycles, and
- * the comparisons the document asks for.
+ * the comparisons the document asks for. With `structures` (read by the structure toolkit),
+ * species formulas and charges come from their structures and structure findings lead.
  */
-export function analyseDocument(doc: Document): DocumentAnalysis {
-  return analyseResolved(doc, resolveProfile(doc));
+export function analyseDocument(input: Document, structures?: StructureTable | null): DocumentAnalysis {
+  const doc = structures ? withStructureFormulas(input, structures) : input;
+  const resolved = resolveProfile(doc);
+  const profile = structures ? { ...resolved, findings: [...structureFindings(input, structures), ...resolved.findings] } : resolved;
+  return analyseResolved(doc, profile);
 }
 
 /** The analysis of `doc` from a profile already resolved from it (e.g. with unresolved inputs marked). */

@@ -1,4 +1,5 @@
 import { analyseDocument } from '../analysis/analyseDocument.ts';
+import { documentStructures } from './documentStructures.ts';
 import { CliError, type CliIo } from './io.ts';
 import { loadInput } from './loadInput.ts';
 import { applySettingOptions } from './options.ts';
@@ -15,12 +16,13 @@ export interface AnalyzeOptions {
 }
 
 /**
- * `passline analyze FILE`: resolves the profile and prints points, analysis and findings,
+ * `passline analyze FILE`: resolves the profile and prints points, analysis and findings
+ * (formulas and charges from the species' structures, where they have any),
  * ending (text form) with a summary line counting the findings by severity.
  */
-export function runAnalyze(file: string, options: AnalyzeOptions, io: CliIo): void {
+export async function runAnalyze(file: string, options: AnalyzeOptions, io: CliIo): Promise<void> {
   const doc = applySettingOptions(loadInput(file, io), options);
-  const analysis = analyseDocument(doc);
+  const analysis = analyseDocument(doc, await documentStructures(doc));
   const base = analysisReport(doc, analysis);
   const report = { ...base, checks: [...base.checks, ...documentFindings(doc, analysis.profile)] };
   const summary = `findings: ${findingCounts(report.checks)}`;

@@ -1,5 +1,8 @@
 import { extname } from 'node:path';
 import { resolveProfile } from '../profile/resolve.ts';
+import { pointDepictions } from '../structure/pointDepictions.ts';
+import { withStructureFormulas } from '../structure/withStructureFormulas.ts';
+import { documentStructures } from './documentStructures.ts';
 import { renderFigure } from '../export/renderFigure.node.ts';
 import { checkRenderOptions, type FigureFormat } from '../export/renderFigure.ts';
 import { readFontMetrics } from '../figure/font/fontMetrics.ts';
@@ -39,7 +42,8 @@ function pick<T extends string>(name: string, value: string | undefined, allowed
 
 /**
  * `passline render FILE -o OUT.svg|pdf|png`: the figure, drawn from the same scene as the
- * app. Labels left out for want of room are named in a warning on stderr (exit code 0).
+ * app, molecule drawings included. Labels and drawings left out for want of room are named
+ * in a warning on stderr (exit code 0).
  */
 export async function runRender(file: string, options: RenderCliOptions, io: CliIo): Promise<void> {
   if (!options.output) throw new CliError('render: -o OUT.svg, OUT.pdf or OUT.png is required', EXIT_USAGE);
@@ -52,7 +56,8 @@ export async function runRender(file: string, options: RenderCliOptions, io: Cli
   const problem = checkRenderOptions({ dpi, widthMm });
   if (problem) throw new CliError(`--${problem.replace(/^width/, 'width-mm')}`, EXIT_USAGE);
   const doc = applySettingOptions(loadInput(file, io), options);
-  const profile = resolveProfile(doc);
+  const structures = await documentStructures(doc);
+  const profile = resolveProfile(structures ? withStructureFormulas(doc, structures) : doc);
   const findings = documentFindings(doc, profile);
   const blank = findings.find((f) => f.code === 'no-points');
   if (blank) throw new CliError(`${file}: ${blank.message}; nothing was written`);
@@ -62,7 +67,7 @@ export async function runRender(file: string, options: RenderCliOptions, io: Cli
   }
   const fontBytes = readBundledFont();
   const metrics = readFontMetrics(fontBytes);
-  const layout = { ...(preset ? { preset } : {}), ...(theme ? { theme } : {}), ...(widthMm !== undefined ? { widthMm } : {}) };
+  const layout = { ...(preset ? { preset } : {}), ...(theme ? { theme } : {}), ...(widthMm !== undefined ? { widthMm } : {}), ...(structures ? { structures: pointDepictions(doc, structures) } : {}) };
   const data = await renderFigure(profile, doc, { format, fontBytes, ...layout, ...(dpi !== undefined ? { dpi } : {}) });
   await writeOutput(options.output, data, io);
   // renderFigure keeps its scene to itself; laying out again costs milliseconds.

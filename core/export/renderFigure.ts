@@ -4,6 +4,7 @@ import type { Preset } from '../figure/presets.ts';
 import type { ThemeName } from '../figure/themes.ts';
 import type { Document } from '../model/schema.ts';
 import type { ResolvedProfile } from '../profile/types.ts';
+import type { PointDrawing } from '../structure/pointDepictions.ts';
 import type { FontSubsetter } from './sceneToPdf.ts';
 import { sceneToSvg } from './sceneToSvg.ts';
 
@@ -28,6 +29,8 @@ export interface RenderOptions {
   embedFontInSvg?: boolean;
   subsetFont?: FontSubsetter;
   rasterise?: Rasteriser;
+  /** Molecule drawings by point (pointDepictions), drawn as vectors beside the levels. */
+  structures?: ReadonlyMap<string, PointDrawing>;
 }
 
 /** Largest and smallest accepted values (our limits: beyond them files get silly). */
@@ -58,6 +61,7 @@ export async function renderFigure(profile: ResolvedProfile, doc: Document, opti
     ...(options.widthMm !== undefined ? { widthMm: options.widthMm } : {}),
     ...(options.heightMm !== undefined ? { heightMm: options.heightMm } : {}),
     ...(options.autoSubscript !== undefined ? { autoSubscript: options.autoSubscript } : {}),
+    ...(options.structures ? { structures: options.structures } : {}),
   });
   if (options.format === 'pdf') {
     // Loaded on demand: jsPDF is most of the code an SVG or PNG export would otherwise load.

@@ -25,6 +25,10 @@ export function svgSink(): SvgSink {
     text(item) {
       elements.push(textElement(item));
     },
+    group(name, ids) {
+      elements.push(name === null ? '</g>' : '<g id="' + escapeXml(svgId(name)) + '" class="structure"'
+        + (ids.pathway ? ' data-pathway="' + escapeXml(ids.pathway) + '"' : '') + (ids.point ? ' data-point="' + escapeXml(ids.point) + '"' : '') + '>');
+    },
   };
 }
 
@@ -45,4 +49,9 @@ function textElement(item: TextItem): string {
     out += '<tspan x="' + num(item.x + r.dx) + '" y="' + num(item.y + r.dy) + '" font-size="' + num(r.sizeMm) + '">' + escapeXml(safeText(r.text)) + '</tspan>';
   }
   return out + '</text>';
+}
+
+/** A group name as an XML id: letters, digits, '-', '_' and '.', other characters as '_'. */
+function svgId(name: string): string {
+  return name.replace(/[^A-Za-z0-9_.-]+/g, '-');
 }

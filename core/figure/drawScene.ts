@@ -1,7 +1,7 @@
 import type { Scene } from './scene.ts';
 import type { DrawingSink } from './sink.ts';
 
-/** Walks a scene in order and replays it onto a sink (background first, if any). */
+/** Walks a scene in order and replays it onto a sink (background first, if any), opening and closing named groups. */
 export function drawScene(scene: Scene, sink: DrawingSink): void {
   if (scene.background) {
     sink.moveTo(0, 0);
@@ -11,7 +11,13 @@ export function drawScene(scene: Scene, sink: DrawingSink): void {
     sink.closePath();
     sink.paint(undefined, scene.background);
   }
+  let group: string | undefined;
   for (const item of scene.items) {
+    if (item.group !== group) {
+      if (group !== undefined) sink.group?.(null, {});
+      group = item.group;
+      if (group !== undefined) sink.group?.(group, { pathway: item.pathway, point: item.point });
+    }
     if (item.kind === 'text') {
       sink.text(item);
       continue;
@@ -24,4 +30,5 @@ export function drawScene(scene: Scene, sink: DrawingSink): void {
     }
     sink.paint(item.stroke, item.fill);
   }
+  if (group !== undefined) sink.group?.(null, {});
 }

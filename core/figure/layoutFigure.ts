@@ -17,6 +17,8 @@ import { figureSize, PRESETS, type Preset } from './presets.ts';
 import type { Scene, SceneItem } from './scene.ts';
 import { sceneObstacles } from './sceneObstacles.ts';
 import { THEMES, type ThemeName } from './themes.ts';
+import type { PointDrawing } from '../structure/pointDepictions.ts';
+import { grownHeight, structureLayer, structureRoom } from './structures/structureLayer.ts';
 
 /** Text keeps at least this far inside the page (issue 11's rule: 1 mm; a little more for rounding). */
 export const PAGE_MARGIN_MM = 1.2;
@@ -31,6 +33,8 @@ export interface LayoutOptions {
   theme?: ThemeName;
   /** Lower digits in formula-like words of labels (H2O → H₂O). Default false. */
   autoSubscript?: boolean;
+  /** Molecule drawings by point (see pointDepictions); none when absent. */
+  structures?: ReadonlyMap<string, PointDrawing>;
 }
 
 /**
@@ -46,7 +50,10 @@ export function layoutFigure(profile: ResolvedProfile, doc: Document, options: L
   const fig = doc.figure;
   const theme = THEMES[options.theme ?? fig.theme];
   const preset = options.preset ?? fig.preset;
-  const size = figureSize(preset, options.widthMm ?? fig.widthMm, options.heightMm ?? fig.heightMm);
+  const given = figureSize(preset, options.widthMm ?? fig.widthMm, options.heightMm ?? fig.heightMm);
+  const drawings = options.structures ?? new Map<string, PointDrawing>();
+  const room = structureRoom(figureContext(doc, profile.unit, options.metrics, theme, given, false, PRESETS[preset].textScale), drawings, PRESETS[preset].textScale);
+  const size = { ...given, heightMm: grownHeight(given, (options.heightMm ?? fig.heightMm) !== undefined, preset, room) };
   const ctx = figureContext(doc, profile.unit, options.metrics, theme, size, options.autoSubscript ?? false, PRESETS[preset].textScale);
   const pathways = collectPoints(profile, doc);
   const paints = pathways.map((p) => pathwayPaint(p.index, doc.pathways.find((d) => d.id === p.id)?.style, theme, fig.connector));
@@ -74,7 +81,7 @@ export function layoutFigure(profile: ResolvedProfile, doc: Document, options: L
   const tallest = Math.max(0, ...[...measured.values()].map((b) => b.h));
   const stacked = stackDepth(known);
   const pad = (lines: number) => Math.max(tallest, lines * ctx.lineMm) + 3 * ctx.gapMm;
-  const scale = energyScale(energies, y1 - pad(stacked.bottom), y0 + pad(stacked.top), 5, 1.5 * ctx.lineMm);
+  const scale = energyScale(energies, y1 - pad(stacked.bottom) - room.below, y0 + pad(stacked.top) + room.above, 5, 1.5 * ctx.lineMm);
 
   const slots = pathways.flatMap((p) => p.points.map((q) => q.slot));
   const lo = Math.min(0, ...slots);
@@ -105,9 +112,11 @@ export function layoutFigure(profile: ResolvedProfile, doc: Document, options: L
   // Everything drawn so far is an obstacle, whatever it is (see sceneObstacles).
   const placedLabels = labels(ctx, placed, paintByIndex, labelBounds, sceneObstacles(items), marks, measured);
   items.push(...placedLabels.items);
+  const molecules = structureLayer(ctx, placed, items, drawings, room, placedLabels.boxes, { ...labelBounds, w: labelBounds.w - ctx.gapMm });
+  items.push(...molecules.items);
   items.push(...key.items);
   if (fig.showCoordinateArrow) items.push(...coordinateArrow(ctx, plot.x, x1, y1 + margin / 2));
-  return { widthMm: size.widthMm, heightMm: size.heightMm, background: theme.background, fontFamily: options.metrics.family, items, omittedLabels: placedLabels.omitted };
+  return { widthMm: size.widthMm, heightMm: size.heightMm, background: theme.background, fontFamily: options.metrics.family, items, omittedLabels: [...placedLabels.omitted, ...molecules.omitted] };
 }
 
 /**

@@ -21,9 +21,9 @@ export function omittedLabelsMessage(omitted: readonly OmittedLabel[], named = N
 }
 
 function describe(label: OmittedLabel): string {
-  return label.kind === 'level'
-    ? `${label.label ? `"${label.label}"` : `the unnamed point "${label.point}"`} (${label.pathwayName})`
-    : `"${label.text}" (figure annotation ${label.annotation + 1})`;
+  if (label.kind === 'annotation') return `"${label.text}" (figure annotation ${label.annotation + 1})`;
+  const name = `${label.label ? `"${label.label}"` : `the unnamed point "${label.point}"`} (${label.pathwayName})`;
+  return label.kind === 'structure' ? `the structure of ${name}` : name;
 }
 
 function joinWithAnd(parts: readonly string[]): string {

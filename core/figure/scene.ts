@@ -21,7 +21,7 @@ export interface Stroke {
 /** What a primitive stands for, so the canvas can pick and style it. */
 export type Role =
   | 'background' | 'level' | 'connector' | 'axis' | 'tick' | 'arrow'
-  | 'legend' | 'leader' | 'label' | 'annotation' | 'title';
+  | 'legend' | 'leader' | 'label' | 'annotation' | 'title' | 'structure';
 
 /** A stroked and/or filled path. */
 export interface PathItem {
@@ -35,6 +35,8 @@ export interface PathItem {
   /** For a mark inside a label block (a stacked label's pathway key): as on TextItem. */
   levels?: { pathway: string; point: string }[];
   block?: string;
+  /** Name of the group the item belongs to (a molecule drawing); consecutive items share it. */
+  group?: string;
 }
 
 /** A run of text at one size, offset from its item's anchor (baseline, left end). */
@@ -74,6 +76,8 @@ export interface TextItem {
   levels?: { pathway: string; point: string }[];
   /** For a label line: the id its block's lines share, when not its pathway/point. */
   block?: string;
+  /** As on PathItem. */
+  group?: string;
 }
 
 /**
@@ -91,9 +95,11 @@ export type SceneItem = PathItem | TextItem;
  *   state shared by several pathways, labelled once, is listed once, under the first.
  * - `annotation`: the label of a barrier arrow or span bracket; `annotation` indexes
  *   `doc.figure.annotations` (from 0), `text` is the label's text (e.g. "ΔG‡ = 14.2").
+ * - `structure`: the molecule drawing of a level, named like a level's label.
  */
 export type OmittedLabel =
   | { kind: 'level'; pathway: string; point: string; pathwayName: string; label: string }
+  | { kind: 'structure'; pathway: string; point: string; pathwayName: string; label: string }
   | { kind: 'annotation'; annotation: number; pathway: string; pathwayName: string; text: string };
 
 /** A complete figure. */

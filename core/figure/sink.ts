@@ -12,4 +12,6 @@ export interface DrawingSink {
   /** Paints the current path (stroke and/or fill) and starts a new one. */
   paint(stroke: Stroke | undefined, fill: string | undefined): void;
   text(item: TextItem): void;
+  /** Starts a named group (a molecule drawing), or ends the open one with null; optional. */
+  group?(name: string | null, ids: { pathway?: string; point?: string }): void;
 }

@@ -54,7 +54,7 @@ export const BOUNDS = {
   lowModeCutoffCm1: bound('quasi-harmonic cut-off', 'cm⁻¹', [1, 1_000], [50, 200]),
   /** Concentration, mol/L. */
   concentration: bound('concentration', 'mol/L', [0, 1e4], [1e-9, 100]),
-  /** Net charge of a species, in elementary charges. */
+  /** Net charge of a species or a molecule, in elementary charges. */
   charge: bound('charge', 'e', [-100, 100], [-4, 4]),
   /** Standard molar entropy, J/(mol K); ions in solution may be negative. */
   entropy: bound('entropy', 'J/(mol K)', [-10_000, 10_000], [-500, 2_000]),

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { ENERGY_UNITS } from '../units/energy.ts';
 import { bounded, boundedInt, boundedText, checkEnergyField } from './bounded.ts';
+import { BOUNDS, outsideHard } from './bounds.ts';
 import { describe } from './describe.ts';
 
 /**
@@ -68,6 +69,23 @@ export const Structure = z.strictObject({
   source: z.strictObject({ files: z.array(SourceFile).min(1), corrections: z.string().optional() }).optional(),
 });
 
+/**
+ * A molecule's structure as the user gave it: a SMILES string, an MDL molfile, or an XYZ
+ * geometry (bonds perceived from interatomic distances). Formula and charge derive from it;
+ * the figure draws it beside the level.
+ */
+export const Molecule = z.strictObject({
+  format: z.enum(['smiles', 'molfile', 'xyz'], { error: (i) => `expected a structure format (smiles, molfile, xyz), got ${describe(i.input)}` }),
+  text: z.string().trim().min(1, 'expected a structure (SMILES, molfile or XYZ text)').max(1_000_000, 'expected a structure under 1 000 000 characters'),
+  /** Net charge of an XYZ geometry (XYZ has none); SMILES and molfiles carry their own. */
+  charge: z.int().min(BOUNDS.charge.hard[0]).max(BOUNDS.charge.hard[1]).optional(),
+  /**
+   * Forming and breaking bonds of a transition state, each as the two atom map numbers
+   * (SMILES `[C:2]`, the molfile's mapping column) of a bond in the structure: drawn dashed.
+   */
+  partialBonds: z.array(z.tuple([z.int().min(1), z.int().min(1)])).max(50).optional(),
+});
+
 export const Species = z.strictObject({
   id: z.string().min(1, 'expected a non-empty id'),
   label: boundedText(),
@@ -83,6 +101,8 @@ export const Species = z.strictObject({
   correctionTemperatureK: bounded('temperatureK', ' in K').optional(),
   /** One structure, or several conformers that are Boltzmann-weighted. */
   structures: z.array(Structure).default([]),
+  /** The species' molecule: its formula and charge then come from it. */
+  molecule: Molecule.optional(),
   formation: z.strictObject({
     dfH: bounded('relativeEnergyKJ', ' in kJ/mol').optional(),
     S: bounded('entropy', ' in J/(mol K)').optional(),
@@ -126,6 +146,10 @@ export const Point = z.strictObject({
   x: bounded('coordinate').optional(),
   barWidthMm: positive(' in mm').pipe(bounded('lengthMm')).optional(),
   labelOffsetMm: z.strictObject({ dx: bounded('offsetMm', ' in mm'), dy: bounded('offsetMm', ' in mm') }).optional(),
+  /** A molecule drawn at this point (wins over its species' molecules). */
+  molecule: Molecule.optional(),
+  /** Which side of the level this point's drawing goes (overrides the figure's choice). */
+  moleculeSide: z.enum(['above', 'below']).optional(),
 });
 
 export const PathwayStyle = z.strictObject({
@@ -183,6 +207,12 @@ export const Figure = z.strictObject({
   showLegend: z.boolean().default(true),
   daggerOnTs: z.boolean().default(true),
   energyFormat: z.enum(['plain', 'parentheses', 'withUnit']).default('plain'),
+  /** Molecule drawings beside the levels: shown or not, which side, largest side in mm. */
+  molecules: z.strictObject({
+    show: z.boolean().default(true),
+    side: z.enum(['above', 'below']).default('above'),
+    sizeMm: positive(' in mm').refine((v) => outsideHard('lengthMm', v) === null, { message: `expected a drawing size up to ${BOUNDS.lengthMm.hard[1]} mm` }).optional(),
+  }).optional(),
   annotations: z.array(z.discriminatedUnion('type', [
     z.strictObject({ type: z.literal('barrier'), pathway: z.string(), from: z.string(), to: z.string() }),
     z.strictObject({ type: z.literal('span'), pathway: z.string() }),
@@ -213,6 +243,7 @@ export type PointKind = z.infer<typeof PointKind>;
 export type SpeciesTerm = z.infer<typeof SpeciesTerm>;
 export type Structure = z.infer<typeof Structure>;
 export type SourceFile = z.infer<typeof SourceFile>;
+export type Molecule = z.infer<typeof Molecule>;
 export type Species = z.infer<typeof Species>;
 export type Estimate = z.infer<typeof Estimate>;
 export type EnergySpec = z.infer<typeof EnergySpec>;

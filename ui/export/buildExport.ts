@@ -1,5 +1,6 @@
 import type { Document } from '../../core/model/schema.ts';
 import type { DocumentAnalysis } from '../../core/analysis/analyseDocument.ts';
+import type { PointDrawing } from '../../core/structure/pointDepictions.ts';
 import type { FontMetrics } from '../../core/figure/font/fontMetrics.ts';
 import { layoutFigure } from '../../core/figure/layoutFigure.ts';
 import type { Preset } from '../../core/figure/presets.ts';
@@ -27,8 +28,8 @@ export interface ExportFile { data: string | Uint8Array; mimeType: ExportMimeTyp
 export interface ExportFont { metrics: FontMetrics; bytes: Uint8Array }
 
 /** Lays the figure out with the chosen preset and theme (the same scene the canvas draws) and writes the chosen format. */
-export async function buildExport(doc: Document, analysis: DocumentAnalysis, font: ExportFont, choice: ExportChoice, render = true): Promise<ExportFile> {
-  const figure = () => layoutFigure(analysis.profile, doc, { metrics: font.metrics, preset: choice.preset, theme: choice.theme });
+export async function buildExport(doc: Document, analysis: DocumentAnalysis, font: ExportFont, choice: ExportChoice, render = true, structures?: ReadonlyMap<string, PointDrawing>): Promise<ExportFile> {
+  const figure = () => layoutFigure(analysis.profile, doc, { metrics: font.metrics, preset: choice.preset, theme: choice.theme, ...(structures ? { structures } : {}) });
   const tables = () => analysisTables(analysisReport(doc, analysis), doc.settings.decimals);
   switch (choice.kind) {
     case 'svg': { const svg = sceneToSvg(figure()); return { data: svg, mimeType: 'image/svg+xml', extension: '.svg', preview: { svg } }; }

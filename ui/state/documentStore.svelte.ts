@@ -5,6 +5,9 @@ import { resolveProfile } from '../../core/profile/resolve.ts';
 import { markUnresolved } from '../../core/profile/checks/unresolvedInputs.ts';
 import { activeInputs, withInput, withoutInput, type HeldInput, type InputPlace } from './heldInputs.ts';
 import type { ResolvedProfile } from '../../core/profile/types.ts';
+import { pointDepictions, type PointDrawing } from '../../core/structure/pointDepictions.ts';
+import { hasStructures, readStructures, type StructureTable } from '../../core/structure/readStructures.ts';
+import type { StructureToolkit } from '../../core/structure/structureToolkit.ts';
 import { closeGroup, record, redo, startHistory, undo, type History, type RecordOptions } from '../../core/edit/history.ts';
 import { DOCUMENT_EXTENSION, type ExportRequest, type HostApi } from '../host/hostApi.ts';
 import { suggestFileName } from './suggestFileName.ts';
@@ -48,6 +51,14 @@ export class DocumentStore {
   held: readonly HeldInput[] = $state.raw([]);
   /** The held entries that still apply to the document shown (undo or a drag may have replaced their data). */
   readonly unresolved: readonly HeldInput[];
+  /** The structure toolkit once loaded (on first meeting a structure, never at start-up). */
+  toolkit: StructureToolkit | null = $state.raw(null);
+  /** Why the toolkit could not be loaded, for the user. */
+  toolkitProblem = $state('');
+  /** The document's structures as read by the toolkit (null before it loads or without structures). */
+  readonly structures: StructureTable | null;
+  /** Molecule drawings for the figure, by point. */
+  readonly drawings: ReadonlyMap<string, PointDrawing> | undefined;
   readonly #host: HostApi;
 
   constructor(host: HostApi, initial: Document, fileName: string) {
@@ -56,11 +67,25 @@ export class DocumentStore {
     this.saved = $state.raw<Document | null>(initial);
     this.fileName = $state(fileName);
     this.doc = $derived(this.history.present);
+    this.structures = $derived(this.toolkit && hasStructures(this.doc) ? readStructures(this.doc, this.toolkit) : null);
+    this.drawings = $derived(this.structures ? pointDepictions(this.doc, this.structures) : undefined);
     this.unresolved = $derived(activeInputs(this.doc, this.held));
-    this.analysis = $derived(this.unresolved.length === 0 ? analyseDocument(this.doc)
+    this.analysis = $derived(this.unresolved.length === 0 ? analyseDocument(this.doc, this.structures)
       : analyseResolved(this.doc, markUnresolved(this.doc, resolveProfile(this.doc), this.unresolved)));
     this.profile = $derived(this.analysis.profile);
     this.dirty = $derived(this.doc !== this.saved);
+  }
+
+  /** Loads the structure toolkit if the document needs it (a separate chunk, fetched once). */
+  async needToolkit(): Promise<void> {
+    if (this.toolkit || !hasStructures(this.doc)) return;
+    try {
+      const { loadStructureToolkit } = await import('../../core/structure/loadStructureToolkit.ts');
+      this.toolkit = await loadStructureToolkit();
+      this.toolkitProblem = '';
+    } catch (error) {
+      this.toolkitProblem = `Structures cannot be drawn: the structure toolkit did not load (${error instanceof Error ? error.message : String(error)}).`;
+    }
   }
 
   /** Records the result of an edit; an edit that changed nothing leaves history alone. */

@@ -75,7 +75,14 @@ function fasterThanDiffusion({ pathway, steps }: PathwayAnalysis): Finding[] {
  * the comparisons the document asks for.
  */
 export function analyseDocument(doc: Document): DocumentAnalysis {
-  const profile = resolveProfile(doc);
+  return analyseResolved(doc, resolveProfile(doc));
+}
+
+/**
+ * The analysis half of `analyseDocument`, for a profile already resolved from `doc` (the
+ * uncertainty sampler resolves linear inputs once and re-runs only this per sample).
+ */
+export function analyseResolved(doc: Document, profile: ResolvedProfile): DocumentAnalysis {
   const extra: Finding[] = [];
   const options = { temperatureK: profile.temperatureK, transmission: doc.settings.transmission };
   const pathways = profile.pathways.map((pathway, i): PathwayAnalysis => {

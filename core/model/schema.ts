@@ -26,6 +26,8 @@ export const Unit = z.enum(ENERGY_UNITS, { error: (i) => `expected one of ${ENER
 export const Quantity = z.enum(['E', 'H', 'G'], { error: (i) => `expected E, H or G, got ${describe(i.input)}` });
 export const PointKind = z.enum(['min', 'ts'], { error: (i) => `expected "min" or "ts", got ${describe(i.input)}` });
 const positive = (what: string) => finite(what).refine((v) => v > 0, { message: `expected a positive number${what}` });
+/** Optional standard uncertainty σ ≥ 0 of the value beside it, in that value's unit (issue 18). */
+const sigma = (what: string) => finite(what).refine((v) => v >= 0, { message: `expected a standard uncertainty ≥ 0${what}` }).optional();
 
 /** One species count inside a state: `{ species: "cat", count: 1 }`. */
 export const SpeciesTerm = z.strictObject({
@@ -40,6 +42,9 @@ export const Structure = z.strictObject({
   singlePoint: finite(' in hartree').optional(),
   hCorrection: finite(' in hartree').optional(),
   gCorrection: finite(' in hartree').optional(),
+  /** σ of the electronic (or single-point) energy, and of the thermal correction used, in hartree. */
+  sigma: sigma(' in hartree'),
+  correctionSigma: sigma(' in hartree'),
 });
 
 export const Species = z.strictObject({
@@ -59,20 +64,22 @@ export const Species = z.strictObject({
     dfH: finite(' in kJ/mol').optional(),
     S: finite(' in J/(mol K)').optional(),
     dfG: finite(' in kJ/mol').optional(),
+    dfHSigma: sigma(' in kJ/mol'),
+    dfGSigma: sigma(' in kJ/mol'),
   }).optional(),
 });
 
 const valueIn = finite('');
-const EnergyValue = z.strictObject({ mode: z.literal('value'), value: valueIn, unit: Unit, quantity: Quantity.optional() });
+const EnergyValue = z.strictObject({ mode: z.literal('value'), value: valueIn, unit: Unit, quantity: Quantity.optional(), sigma: sigma('') });
 const EnergySpecies = z.strictObject({ mode: z.literal('species'), terms: z.array(SpeciesTerm).min(1, 'expected at least one species') });
 const EnergyFormation = z.strictObject({ mode: z.literal('formation'), terms: z.array(SpeciesTerm).min(1, 'expected at least one species') });
-const EnergyStep = z.strictObject({ mode: z.literal('step'), value: valueIn, unit: Unit, quantity: Quantity.optional() });
-const EnergyBarrier = z.strictObject({ mode: z.literal('barrier'), value: valueIn, unit: Unit, quantity: Quantity.optional() });
+const EnergyStep = z.strictObject({ mode: z.literal('step'), value: valueIn, unit: Unit, quantity: Quantity.optional(), sigma: sigma('') });
+const EnergyBarrier = z.strictObject({ mode: z.literal('barrier'), value: valueIn, unit: Unit, quantity: Quantity.optional(), sigma: sigma('') });
 
 const RatePoint = z.strictObject({ temperatureK: positive(' in K'), k: positive(' (rate constant)') });
 export const Estimate = z.discriminatedUnion('method', [
-  z.strictObject({ method: z.literal('marcus'), lambda: positive(''), unit: Unit }),
-  z.strictObject({ method: z.literal('bep'), e0: valueIn, alpha: valueIn, unit: Unit }),
+  z.strictObject({ method: z.literal('marcus'), lambda: positive(''), unit: Unit, lambdaSigma: sigma('') }),
+  z.strictObject({ method: z.literal('bep'), e0: valueIn, alpha: valueIn, unit: Unit, e0Sigma: sigma('') }),
   z.strictObject({ method: z.literal('rateConstant'), k: positive(' (rate constant)'), molecularity: z.int().min(1).max(3).default(1), temperatureK: positive(' in K').optional() }),
   z.strictObject({ method: z.literal('halfLife'), seconds: positive(' in s'), temperatureK: positive(' in K').optional() }),
   z.strictObject({ method: z.literal('eyringFit'), data: z.array(RatePoint).min(2, 'expected at least two (T, k) points') }),
@@ -127,6 +134,13 @@ export const Settings = z.strictObject({
     z.strictObject({ kind: z.literal('first') }),
     z.strictObject({ kind: z.literal('point'), pathway: z.string(), point: z.string() }),
   ]).default({ kind: 'first' }),
+  /** Monte Carlo settings (issue 18); `defaultSigma` applies to entered energies that carry no σ of their own. */
+  uncertainty: z.strictObject({
+    defaultSigma: sigma(''),
+    defaultSigmaUnit: Unit.default('kcal/mol'),
+    samples: z.int().min(10).max(1_000_000).default(10_000),
+    seed: z.int().min(0).max(4_294_967_295).default(1),
+  }).optional(),
 });
 
 export const Figure = z.strictObject({

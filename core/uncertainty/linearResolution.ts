@@ -29,7 +29,7 @@ function isLinear(doc: Document, inputs: readonly UncertainInput[]): boolean {
  * input instead of once per sample. The linearity is checked at two trial points against a
  * full resolution (≤ 1e-6 J/mol); null when it does not hold, so the caller samples in full.
  */
-export function linearResolution(doc: Document, inputs: readonly UncertainInput[], base: ResolvedProfile): ((z: ArrayLike<number>) => ResolvedProfile) | null {
+export function linearResolution(doc: Document, inputs: readonly UncertainInput[], base: ResolvedProfile): ((z: ArrayLike<number>, offset?: number) => ResolvedProfile) | null {
   if (!isLinear(doc, inputs)) return null;
   const m = inputs.length;
   const e0 = flatten(base);
@@ -43,10 +43,10 @@ export function linearResolution(doc: Document, inputs: readonly UncertainInput[
     for (let k = 0; k < n; k++) columns[i * n + k] = shifted[k]! - e0[k]!;
   });
   const energies = new Float64Array(n);
-  const predict = (z: ArrayLike<number>) => {
+  const predict = (z: ArrayLike<number>, offset = 0) => {
     energies.set(e0);
     for (let i = 0; i < m; i++) {
-      const zi = z[i]!;
+      const zi = z[offset + i]!;
       if (zi === 0) continue;
       const off = i * n;
       for (let k = 0; k < n; k++) energies[k] = energies[k]! + zi * columns[off + k]!;
@@ -61,12 +61,18 @@ export function linearResolution(doc: Document, inputs: readonly UncertainInput[
       if (Math.abs(full[k]! - linear[k]!) > 1e-6 + 1e-12 * Math.abs(full[k]!)) return null;
     }
   }
-  return (z) => {
-    const e = predict(z);
+  return (z, offset = 0) => {
+    const e = predict(z, offset);
     let k = 0;
-    return {
-      ...base,
-      pathways: base.pathways.map((p) => ({ ...p, points: p.points.map((q) => { const v = e[k++]!; return { ...q, energyJ: Number.isNaN(v) ? null : v }; }) })),
-    };
+    const pathways = base.pathways.map((p) => {
+      const points = new Array<ResolvedProfile['pathways'][number]['points'][number]>(p.points.length);
+      for (let i = 0; i < points.length; i++) {
+        const q = p.points[i]!;
+        const v = e[k++]!;
+        points[i] = { id: q.id, label: q.label, kind: q.kind, energyJ: Number.isNaN(v) ? null : v, provenance: q.provenance };
+      }
+      return { id: p.id, name: p.name, cycle: p.cycle, points };
+    });
+    return { ...base, pathways };
   };
 }

@@ -87,11 +87,11 @@ export function startUncertainty(doc: Document, options: UncertaintyOptions = {}
     step(count) {
       const end = Math.min(total, done + Math.max(0, Math.floor(count)));
       for (let s = done; s < end; s++) {
-        const row = z.subarray(s * m, (s + 1) * m);
-        for (let i = 0; i < m; i++) row[i] = normal();
-        if (fast) record(s, analyseResolved(doc, fast(row)));
+        const off = s * m;
+        for (let i = 0; i < m; i++) z[off + i] = normal();
+        if (fast) record(s, analyseResolved(doc, fast(z, off)));
         else {
-          for (let i = 0; i < m; i++) deltas[i] = row[i]! * inputs[i]!.sigma;
+          for (let i = 0; i < m; i++) deltas[i] = z[off + i]! * inputs[i]!.sigma;
           record(s, analyseDocument(perturbDocument(doc, inputs, deltas)));
         }
       }

@@ -1,19 +1,40 @@
 import { analyseDocument } from '../analysis/analyseDocument.ts';
 import type { CliIo } from './io.ts';
+import { CliError, EXIT_USAGE } from './io.ts';
 import { loadInput } from './loadInput.ts';
 import { applySettingOptions } from './options.ts';
 import { analysisReport } from '../report/analysisReport.ts';
 import { analysisText } from '../report/analysisText.ts';
+import { analyseUncertainty } from '../uncertainty/uncertaintyRun.ts';
+import { annotateReport } from '../uncertainty/annotateReport.ts';
+import { uncertaintyText } from '../uncertainty/uncertaintyText.ts';
 
 export interface AnalyzeOptions {
   json?: boolean | undefined;
   unit?: string | undefined;
   temperature?: string | undefined;
+  /** Number of Monte Carlo samples; absent: no uncertainty run. */
+  uncertainty?: string | undefined;
+  seed?: string | undefined;
 }
 
-/** `passline analyze FILE`: resolves the profile and prints points, analysis and findings. */
+function integerOption(name: string, text: string, min: number, max: number): number {
+  const value = Number(text);
+  if (!Number.isInteger(value) || value < min || value > max) throw new CliError(`--${name}: expected a whole number from ${min} to ${max}, got "${text}"`, EXIT_USAGE);
+  return value;
+}
+
+/** `passline analyze FILE`: resolves the profile and prints points, analysis and findings; `--uncertainty N` adds Monte Carlo intervals. */
 export function runAnalyze(file: string, options: AnalyzeOptions, io: CliIo): void {
+  if (options.seed !== undefined && options.uncertainty === undefined) throw new CliError('--seed needs --uncertainty N', EXIT_USAGE);
+  const samples = options.uncertainty === undefined ? undefined : integerOption('uncertainty', options.uncertainty, 10, 1_000_000);
+  const seed = options.seed === undefined ? undefined : integerOption('seed', options.seed, 0, 4_294_967_295);
   const doc = applySettingOptions(loadInput(file, io), options);
   const report = analysisReport(doc, analyseDocument(doc));
-  io.out(options.json ? `${JSON.stringify(report, null, 2)}\n` : analysisText(report));
+  if (samples === undefined) {
+    io.out(options.json ? `${JSON.stringify(report, null, 2)}\n` : analysisText(report));
+    return;
+  }
+  const annotated = annotateReport(report, analyseUncertainty(doc, { samples, seed }));
+  io.out(options.json ? `${JSON.stringify(annotated, null, 2)}\n` : analysisText(report) + uncertaintyText(annotated));
 }

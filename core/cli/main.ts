@@ -24,9 +24,9 @@ type OptionSpec = { type: 'string' | 'boolean'; multiple?: boolean; short?: stri
 
 const COMMANDS: Record<string, { options: Record<string, OptionSpec>; run: Command; args: number }> = {
   analyze: {
-    options: { json: { type: 'boolean' }, unit: { type: 'string' }, temperature: { type: 'string' } },
+    options: { json: { type: 'boolean' }, unit: { type: 'string' }, temperature: { type: 'string' }, uncertainty: { type: 'string' }, seed: { type: 'string' } },
     args: 1,
-    run: ([file], v, io) => runAnalyze(file!, { json: v.json as boolean | undefined, unit: v.unit as string | undefined, temperature: v.temperature as string | undefined }, io),
+    run: ([file], v, io) => runAnalyze(file!, { json: v.json as boolean | undefined, unit: v.unit as string | undefined, temperature: v.temperature as string | undefined, uncertainty: v.uncertainty as string | undefined, seed: v.seed as string | undefined }, io),
   },
   thermo: {
     options: { json: { type: 'boolean' }, reaction: { type: 'string' }, temperature: { type: 'string' }, solve: { type: 'string' }, given: { type: 'string' } },

@@ -1,20 +1,18 @@
 import { unitLabel } from '../units/energy.ts';
-import type { ReportInterval, UncertainReport } from './annotateReport.ts';
-
-type Holder = { uncertainty?: Record<string, unknown> };
+import type { UncertainReport } from './annotateReport.ts';
+import { intervalOf, probabilitiesOf, type Holder } from './reportReaders.ts';
 
 const sci = (x: number) => x.toPrecision(3);
 const percent = (p: number) => `${(100 * p).toFixed(1)} %`;
 
 function interval(holder: Holder | null | undefined, field: string, show: (x: number) => string): string {
-  const i = holder?.uncertainty?.[field] as ReportInterval | undefined;
+  const i = intervalOf(holder, field);
   return i ? `${show(i.median)} [${show(i.low)}, ${show(i.high)}]` : '—';
 }
 
 function probabilities(holder: Holder | null | undefined, field: string): string {
-  const p = holder?.uncertainty?.[`${field}Probability`] as Record<string, number> | undefined;
-  if (!p) return '—';
-  return Object.entries(p).sort((a, b) => b[1] - a[1]).map(([k, v]) => `${k} ${percent(v)}`).join(', ');
+  const p = probabilitiesOf(holder, field);
+  return p.length === 0 ? '—' : p.map(([k, v]) => `${k} ${percent(v)}`).join(', ');
 }
 
 /**

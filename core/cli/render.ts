@@ -1,6 +1,8 @@
 import { extname } from 'node:path';
 import { resolveProfile } from '../profile/resolve.ts';
 import { renderFigure } from '../export/renderFigure.node.ts';
+import { analyseUncertainty } from '../uncertainty/uncertaintyRun.ts';
+import { errorBarRanges } from '../uncertainty/errorBarRanges.ts';
 import { checkRenderOptions, type FigureFormat } from '../export/renderFigure.ts';
 import { readFontMetrics } from '../figure/font/fontMetrics.ts';
 import { layoutFigure } from '../figure/layoutFigure.ts';
@@ -51,7 +53,10 @@ export async function runRender(file: string, options: RenderCliOptions, io: Cli
   const profile = resolveProfile(doc);
   const fontBytes = readBundledFont();
   const layout = { ...(preset ? { preset } : {}), ...(theme ? { theme } : {}), ...(widthMm !== undefined ? { widthMm } : {}) };
-  const data = await renderFigure(profile, doc, { format, fontBytes, ...layout, ...(dpi !== undefined ? { dpi } : {}) });
+  // Error bars set in the document's figure settings come from a Monte Carlo run (its samples and seed).
+  const bars = doc.figure.errorBars;
+  const errorBars = bars ? errorBarRanges(analyseUncertainty(doc), bars) : undefined;
+  const data = await renderFigure(profile, doc, { format, fontBytes, ...layout, ...(dpi !== undefined ? { dpi } : {}), ...(errorBars ? { errorBars } : {}) });
   await writeOutput(options.output, data, io);
   // renderFigure keeps its scene to itself; laying out again costs milliseconds.
   const warning = omittedLabelsMessage(layoutFigure(profile, doc, { metrics: readFontMetrics(fontBytes), ...layout }).omittedLabels);

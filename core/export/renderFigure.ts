@@ -1,4 +1,5 @@
 import { readFontMetrics } from '../figure/font/fontMetrics.ts';
+import { addErrorBars, type ErrorBarRanges } from '../figure/errorBars.ts';
 import { layoutFigure } from '../figure/layoutFigure.ts';
 import type { Preset } from '../figure/presets.ts';
 import type { ThemeName } from '../figure/themes.ts';
@@ -28,6 +29,8 @@ export interface RenderOptions {
   embedFontInSvg?: boolean;
   subsetFont?: FontSubsetter;
   rasterise?: Rasteriser;
+  /** Error bars on the levels (core/figure/errorBars.ts), e.g. from core/uncertainty's errorBarRanges. */
+  errorBars?: ErrorBarRanges;
 }
 
 /** Largest and smallest accepted values (our limits: beyond them files get silly). */
@@ -51,7 +54,7 @@ export async function renderFigure(profile: ResolvedProfile, doc: Document, opti
   const problem = checkRenderOptions(options);
   if (problem) throw new RangeError(`renderFigure: ${problem}`);
   const metrics = readFontMetrics(options.fontBytes);
-  const scene = layoutFigure(profile, doc, {
+  const laidOut = layoutFigure(profile, doc, {
     metrics,
     ...(options.preset ? { preset: options.preset } : {}),
     ...(options.theme ? { theme: options.theme } : {}),
@@ -59,6 +62,7 @@ export async function renderFigure(profile: ResolvedProfile, doc: Document, opti
     ...(options.heightMm !== undefined ? { heightMm: options.heightMm } : {}),
     ...(options.autoSubscript !== undefined ? { autoSubscript: options.autoSubscript } : {}),
   });
+  const scene = options.errorBars ? addErrorBars(laidOut, profile, options.errorBars) : laidOut;
   if (options.format === 'pdf') {
     return sceneToPdf(scene, { fontBytes: options.fontBytes, ...(options.subsetFont ? { subsetFont: options.subsetFont } : {}), title: doc.title || 'Energy profile' });
   }

@@ -156,6 +156,8 @@ export const Figure = z.strictObject({
   showLegend: z.boolean().default(true),
   daggerOnTs: z.boolean().default(true),
   energyFormat: z.enum(['plain', 'parentheses', 'withUnit']).default('plain'),
+  /** Error bars on the levels from the Monte Carlo (issue 18): ±σ of each resolved energy, or its 95 % interval; absent: none. */
+  errorBars: z.enum(['sigma', 'interval']).optional(),
   annotations: z.array(z.discriminatedUnion('type', [
     z.strictObject({ type: z.literal('barrier'), pathway: z.string(), from: z.string(), to: z.string() }),
     z.strictObject({ type: z.literal('span'), pathway: z.string() }),

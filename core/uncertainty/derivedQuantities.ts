@@ -14,6 +14,8 @@ export interface DerivedQuantity {
   path: (string | number)[];
   field: string;
   scale: QuantityScale;
+  /** For a point's energy: the pathway and point ids. */
+  at?: { pathway: string; point: string };
   read: (a: DocumentAnalysis) => number | null;
 }
 
@@ -38,7 +40,7 @@ export function derivedQuantities(a0: DocumentAnalysis): { quantities: DerivedQu
   a0.pathways.forEach((pa, pi) => {
     const id = pa.pathway.id;
     const at = (a: DocumentAnalysis) => a.pathways[pi]!;
-    pa.pathway.points.forEach((p, qi) => q(`${id}/${p.id}/energy`, ['pathways', pi, 'points', qi], 'energy', 'energy', (a) => at(a).pathway.points[qi]!.energyJ));
+    pa.pathway.points.forEach((p, qi) => quantities.push({ key: `${id}/${p.id}/energy`, path: ['pathways', pi, 'points', qi], field: 'energy', scale: 'energy', at: { pathway: id, point: p.id }, read: (a) => at(a).pathway.points[qi]!.energyJ }));
     pa.steps.forEach((_, si) => {
       const path = ['pathways', pi, 'steps', si];
       const s = (a: DocumentAnalysis) => at(a).steps[si]!;

@@ -3,6 +3,8 @@ export interface Interval {
   median: number;
   low: number;
   high: number;
+  /** Sample standard deviation (n − 1). */
+  sd: number;
   /** Samples in which the number could be computed. */
   samples: number;
 }
@@ -51,7 +53,13 @@ export function summarise(values: Float64Array): Interval | null {
   for (let i = 0; i < values.length; i++) if (Number.isFinite(values[i]!)) kept[n++] = values[i]!;
   if (n === 0) return null;
   const xs = kept.subarray(0, n);
-  return { median: quantileInPlace(xs, 0.5), low: quantileInPlace(xs, 0.025), high: quantileInPlace(xs, 0.975), samples: n };
+  let mean = 0;
+  for (let i = 0; i < n; i++) mean += xs[i]!;
+  mean /= n;
+  let ss = 0;
+  for (let i = 0; i < n; i++) ss += (xs[i]! - mean) ** 2;
+  const sd = n > 1 ? Math.sqrt(ss / (n - 1)) : 0;
+  return { median: quantileInPlace(xs, 0.5), low: quantileInPlace(xs, 0.025), high: quantileInPlace(xs, 0.975), sd, samples: n };
 }
 
 /** Share of the samples in which each outcome occurred (null outcomes are not counted). */

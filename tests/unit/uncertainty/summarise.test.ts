@@ -17,7 +17,7 @@ describe('summarise', () => {
   });
 
   it('leaves out samples where the number could not be computed, and returns null when none could', () => {
-    expect(summarise(Float64Array.from([Number.NaN, 3, Infinity, 1, 2]))).toEqual({ median: 2, low: 1.05, high: 2.95, samples: 3 });
+    expect(summarise(Float64Array.from([Number.NaN, 3, Infinity, 1, 2]))).toEqual({ median: 2, low: 1.05, high: 2.95, sd: 1, samples: 3 });
     expect(summarise(Float64Array.from([Number.NaN]))).toBeNull();
   });
 

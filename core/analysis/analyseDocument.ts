@@ -85,7 +85,11 @@ export function analyseDocument(input: Document, structures?: StructureTable | n
   return analyseResolved(doc, profile);
 }
 
-/** The analysis of `doc` from a profile already resolved from it (e.g. with unresolved inputs marked). */
+/**
+ * The analysis half of `analyseDocument`, for a profile already resolved from `doc` (inputs
+ * marked unresolved by the editor; the uncertainty sampler resolves linear inputs once and
+ * re-runs only this per sample).
+ */
 export function analyseResolved(doc: Document, profile: ResolvedProfile): DocumentAnalysis {
   const extra: Finding[] = [];
   const options = { temperatureK: profile.temperatureK, transmission: doc.settings.transmission };

@@ -1,11 +1,14 @@
 import { analyseDocument } from '../analysis/analyseDocument.ts';
 import { documentStructures } from './documentStructures.ts';
-import { CliError, type CliIo } from './io.ts';
+import { CliError, EXIT_USAGE, type CliIo } from './io.ts';
 import { loadInput } from './loadInput.ts';
 import { applySettingOptions } from './options.ts';
 import { analysisReport } from '../report/analysisReport.ts';
 import { analysisText } from '../report/analysisText.ts';
 import { documentFindings, findingCounts } from './documentFindings.ts';
+import { analyseUncertainty } from '../uncertainty/uncertaintyRun.ts';
+import { annotateReport } from '../uncertainty/annotateReport.ts';
+import { uncertaintyText } from '../uncertainty/uncertaintyText.ts';
 
 export interface AnalyzeOptions {
   json?: boolean | undefined;
@@ -13,20 +16,38 @@ export interface AnalyzeOptions {
   temperature?: string | undefined;
   /** Exit 1 when any finding has severity error. */
   strict?: boolean | undefined;
+  /** Number of Monte Carlo samples; absent: no uncertainty run. */
+  uncertainty?: string | undefined;
+  seed?: string | undefined;
+}
+
+function integerOption(name: string, text: string, min: number, max: number): number {
+  const value = Number(text);
+  if (!Number.isInteger(value) || value < min || value > max) throw new CliError(`--${name}: expected a whole number from ${min} to ${max}, got "${text}"`, EXIT_USAGE);
+  return value;
 }
 
 /**
  * `passline analyze FILE`: resolves the profile and prints points, analysis and findings
- * (formulas and charges from the species' structures, where they have any),
- * ending (text form) with a summary line counting the findings by severity.
+ * (formulas and charges from the species' structures, where they have any), ending (text
+ * form) with a summary line counting the findings by severity; `--uncertainty N` adds Monte
+ * Carlo intervals.
  */
 export async function runAnalyze(file: string, options: AnalyzeOptions, io: CliIo): Promise<void> {
+  if (options.seed !== undefined && options.uncertainty === undefined) throw new CliError('--seed needs --uncertainty N', EXIT_USAGE);
+  const samples = options.uncertainty === undefined ? undefined : integerOption('uncertainty', options.uncertainty, 10, 1_000_000);
+  const seed = options.seed === undefined ? undefined : integerOption('seed', options.seed, 0, 4_294_967_295);
   const doc = applySettingOptions(loadInput(file, io), options);
   const analysis = analyseDocument(doc, await documentStructures(doc));
   const base = analysisReport(doc, analysis);
   const report = { ...base, checks: [...base.checks, ...documentFindings(doc, analysis.profile)] };
   const summary = `findings: ${findingCounts(report.checks)}`;
-  io.out(options.json ? `${JSON.stringify(report, null, 2)}\n` : `${analysisText(report)}\n${summary}\n`);
+  if (samples === undefined) {
+    io.out(options.json ? `${JSON.stringify(report, null, 2)}\n` : `${analysisText(report)}\n${summary}\n`);
+  } else {
+    const annotated = annotateReport(report, analyseUncertainty(doc, { samples, seed }));
+    io.out(options.json ? `${JSON.stringify(annotated, null, 2)}\n` : `${analysisText(report)}${uncertaintyText(annotated)}\n${summary}\n`);
+  }
   const errors = report.checks.filter((f) => f.severity === 'error').length;
   if (options.strict && errors > 0) throw new CliError(`--strict: ${errors} finding${errors === 1 ? '' : 's'} of severity error (${summary})`);
 }

@@ -5,13 +5,17 @@ export const VERSION: string = pkg.version;
 
 /** Each command's usage and options, printed by `passline COMMAND --help` (and all together by `passline --help`). */
 export const COMMAND_HELP: Record<string, string> = {
-  analyze: `  passline analyze FILE [--json] [--unit U] [--temperature K]
+  analyze: `  passline analyze FILE [--json] [--unit U] [--temperature K] [--uncertainty N [--seed S]]
       Resolve every pathway of a .passline document or a CSV/TSV table of points
       (header: pathway,label,kind,G [kcal/mol],cycle) and print the points with
       their energies and provenance, and the consistency findings.
       --json           machine-readable output
       --unit U         kcal/mol, kJ/mol, eV, hartree or cm-1
       --temperature K  temperature in kelvin
+      --uncertainty N  Monte Carlo over the σ entered beside values (or the document's
+                       default σ): median and 95 % interval of every number, P(TDTS),
+                       P(faster), and which inputs matter most; N samples (e.g. 10000)
+      --seed S         seed of the generator (default: the document's, else 1)
 `,
   thermo: `  passline thermo TABLE --reaction "CH4(g) + 2 O2(g) -> CO2(g) + 2 H2O(l)" [--temperature K] [--json]
       Reaction thermochemistry by Hess's law from a CSV table of standard formation

@@ -31,9 +31,9 @@ const COMMANDS: Record<string, { options: Record<string, OptionSpec>; run: Comma
     run: async (files, v, io) => (await import('./species.ts')).runSpecies(files, { json: v.json as boolean | undefined, temperature: v.temperature as string | undefined, quasiHarmonic: v['quasi-harmonic'] as string | undefined, cutoff: v.cutoff as string | undefined }, io),
   },
   analyze: {
-    options: { json: { type: 'boolean' }, unit: { type: 'string' }, temperature: { type: 'string' }, strict: { type: 'boolean' } },
+    options: { json: { type: 'boolean' }, unit: { type: 'string' }, temperature: { type: 'string' }, strict: { type: 'boolean' }, uncertainty: { type: 'string' }, seed: { type: 'string' } },
     args: 1,
-    run: async ([file], v, io) => (await import('./analyze.ts')).runAnalyze(file!, { json: v.json as boolean | undefined, unit: v.unit as string | undefined, temperature: v.temperature as string | undefined, strict: v.strict as boolean | undefined }, io),
+    run: async ([file], v, io) => (await import('./analyze.ts')).runAnalyze(file!, { json: v.json as boolean | undefined, unit: v.unit as string | undefined, temperature: v.temperature as string | undefined, strict: v.strict as boolean | undefined, uncertainty: v.uncertainty as string | undefined, seed: v.seed as string | undefined }, io),
   },
   thermo: {
     options: { json: { type: 'boolean' }, reaction: { type: 'string' }, temperature: { type: 'string' }, solve: { type: 'string' }, given: { type: 'string' } },

@@ -4,6 +4,8 @@ import { pointDepictions } from '../structure/pointDepictions.ts';
 import { withStructureFormulas } from '../structure/withStructureFormulas.ts';
 import { documentStructures } from './documentStructures.ts';
 import { renderFigure } from '../export/renderFigure.node.ts';
+import { analyseUncertainty } from '../uncertainty/uncertaintyRun.ts';
+import { errorBarRanges } from '../uncertainty/errorBarRanges.ts';
 import { checkRenderOptions, type FigureFormat } from '../export/renderFigure.ts';
 import { readFontMetrics } from '../figure/font/fontMetrics.ts';
 import { layoutFigure } from '../figure/layoutFigure.ts';
@@ -68,7 +70,10 @@ export async function runRender(file: string, options: RenderCliOptions, io: Cli
   const fontBytes = readBundledFont();
   const metrics = readFontMetrics(fontBytes);
   const layout = { ...(preset ? { preset } : {}), ...(theme ? { theme } : {}), ...(widthMm !== undefined ? { widthMm } : {}), ...(structures ? { structures: pointDepictions(doc, structures) } : {}) };
-  const data = await renderFigure(profile, doc, { format, fontBytes, ...layout, ...(dpi !== undefined ? { dpi } : {}) });
+  // Error bars set in the document's figure settings come from a Monte Carlo run (its samples and seed).
+  const bars = doc.figure.errorBars;
+  const errorBars = bars ? errorBarRanges(analyseUncertainty(doc), bars) : undefined;
+  const data = await renderFigure(profile, doc, { format, fontBytes, ...layout, ...(dpi !== undefined ? { dpi } : {}), ...(errorBars ? { errorBars } : {}) });
   await writeOutput(options.output, data, io);
   // renderFigure keeps its scene to itself; laying out again costs milliseconds.
   const warning = omittedLabelsMessage(layoutFigure(profile, doc, { metrics, ...layout }).omittedLabels);

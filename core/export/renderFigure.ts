@@ -1,4 +1,5 @@
 import { readFontMetrics } from '../figure/font/fontMetrics.ts';
+import { addErrorBars, type ErrorBarRanges } from '../figure/errorBars.ts';
 import { layoutFigure } from '../figure/layoutFigure.ts';
 import type { Preset } from '../figure/presets.ts';
 import type { ThemeName } from '../figure/themes.ts';
@@ -31,6 +32,8 @@ export interface RenderOptions {
   rasterise?: Rasteriser;
   /** Molecule drawings by point (pointDepictions), drawn as vectors beside the levels. */
   structures?: ReadonlyMap<string, PointDrawing>;
+  /** Error bars on the levels (core/figure/errorBars.ts), e.g. from core/uncertainty's errorBarRanges. */
+  errorBars?: ErrorBarRanges;
 }
 
 /** Largest and smallest accepted values (our limits: beyond them files get silly). */
@@ -54,7 +57,7 @@ export async function renderFigure(profile: ResolvedProfile, doc: Document, opti
   const problem = checkRenderOptions(options);
   if (problem) throw new RangeError(`renderFigure: ${problem}`);
   const metrics = readFontMetrics(options.fontBytes);
-  const scene = layoutFigure(profile, doc, {
+  const laidOut = layoutFigure(profile, doc, {
     metrics,
     ...(options.preset ? { preset: options.preset } : {}),
     ...(options.theme ? { theme: options.theme } : {}),
@@ -63,6 +66,7 @@ export async function renderFigure(profile: ResolvedProfile, doc: Document, opti
     ...(options.autoSubscript !== undefined ? { autoSubscript: options.autoSubscript } : {}),
     ...(options.structures ? { structures: options.structures } : {}),
   });
+  const scene = options.errorBars ? addErrorBars(laidOut, profile, options.errorBars) : laidOut;
   if (options.format === 'pdf') {
     // Loaded on demand: jsPDF is most of the code an SVG or PNG export would otherwise load.
     const { sceneToPdf } = await import('./sceneToPdf.ts');

@@ -21,7 +21,7 @@ export interface Stroke {
 /** What a primitive stands for, so the canvas can pick and style it. */
 export type Role =
   | 'background' | 'level' | 'connector' | 'axis' | 'tick' | 'arrow'
-  | 'legend' | 'leader' | 'label' | 'annotation' | 'title' | 'structure';
+  | 'legend' | 'leader' | 'label' | 'annotation' | 'title' | 'structure' | 'errorBar';
 
 /** A stroked and/or filled path. */
 export interface PathItem {

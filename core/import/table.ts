@@ -8,10 +8,10 @@ export type { TableError } from './tableError.ts';
 
 export type TableImport = { ok: true; doc: Document } | { ok: false; errors: TableError[] };
 
-const KNOWN = ['pathway', 'label', 'kind', 'cycle'] as const;
+const KNOWN = ['pathway', 'label', 'kind', 'cycle', 'sigma'] as const;
 const ENERGY_HEADER = /^([EHG])\s*\[(.+)\]$/;
 
-interface Columns { pathway: number; label: number; kind: number; cycle: number; energy: number; quantity: Quantity; unit: Unit }
+interface Columns { pathway: number; label: number; kind: number; cycle: number; sigma: number; energy: number; quantity: Quantity; unit: Unit }
 
 function readHeader(cells: string[], line: number): Columns | TableError[] {
   const errors: TableError[] = [];
@@ -27,7 +27,7 @@ function readHeader(cells: string[], line: number): Columns | TableError[] {
       else if (energy) errors.push({ row: line, column: cell, value: cell, message: 'a second energy column; give one energy column per table' });
       else energy = { index, quantity: match[1] as Quantity, unit };
     } else {
-      errors.push({ row: line, column: cell || `column ${index + 1}`, value: cell, message: 'unknown column; expected pathway, label, kind, cycle and one energy column such as "G [kcal/mol]"' });
+      errors.push({ row: line, column: cell || `column ${index + 1}`, value: cell, message: 'unknown column; expected pathway, label, kind, cycle, sigma and one energy column such as "G [kcal/mol]"' });
     }
   });
   for (const name of ['pathway', 'label', 'kind'] as const) {
@@ -37,7 +37,7 @@ function readHeader(cells: string[], line: number): Columns | TableError[] {
     errors.push({ row: line, column: 'energy', value: '', message: 'missing an energy column such as "G [kcal/mol]" (E, H or G, unit in brackets)' });
   }
   if (errors.length > 0 || !energy) return errors;
-  return { pathway: at.pathway!, label: at.label!, kind: at.kind!, cycle: at.cycle ?? -1, energy: energy.index, quantity: energy.quantity, unit: energy.unit };
+  return { pathway: at.pathway!, label: at.label!, kind: at.kind!, cycle: at.cycle ?? -1, sigma: at.sigma ?? -1, energy: energy.index, quantity: energy.quantity, unit: energy.unit };
 }
 
 function readCycle(cell: string): boolean | undefined {
@@ -60,7 +60,7 @@ export function importTable(text: string, title = 'Imported table'): TableImport
   const columns = readHeader(header.cells, header.line);
   if (Array.isArray(columns)) return { ok: false, errors: columns };
   const errors: TableError[] = [];
-  const pathways = new Map<string, { cycle: boolean | undefined; cycleRow: number; points: { label: string; kind: 'min' | 'ts'; value: number }[] }>();
+  const pathways = new Map<string, { cycle: boolean | undefined; cycleRow: number; points: { label: string; kind: 'min' | 'ts'; value: number; sigma: number | undefined }[] }>();
   for (const { line, cells } of rows.slice(1)) {
     const cell = (i: number) => (i >= 0 ? cells[i] ?? '' : '');
     const fail = (column: string, value: string, message: string) => errors.push({ row: line, column, value, message });
@@ -74,13 +74,18 @@ export function importTable(text: string, title = 'Imported table'): TableImport
     if (value === undefined) fail(header.cells[columns.energy]!, cell(columns.energy), 'expected a number');
     const cycle = columns.cycle >= 0 ? readCycle(cell(columns.cycle)) : false;
     if (cycle === undefined) fail('cycle', cell(columns.cycle), 'expected yes or no');
-    if (!name || !kind || value === undefined || cycle === undefined) continue;
+    // σ is optional per row, in the energy column's unit (issue 18).
+    const sigmaText = cell(columns.sigma);
+    const sigma = sigmaText === '' ? undefined : readNumber(sigmaText, delimiter);
+    const badSigma = sigmaText !== '' && (sigma === undefined || sigma < 0);
+    if (badSigma) fail('sigma', sigmaText, `expected a standard uncertainty ≥ 0 in ${header.cells[columns.energy]!.replace(ENERGY_HEADER, '$2')}, or an empty cell`);
+    if (!name || !kind || value === undefined || cycle === undefined || badSigma) continue;
     const entry = pathways.get(name) ?? { cycle: undefined, cycleRow: line, points: [] };
     if (columns.cycle >= 0 && cell(columns.cycle) !== '') {
       if (entry.cycle !== undefined && entry.cycle !== cycle) fail('cycle', cell(columns.cycle), `pathway "${name}" was marked ${entry.cycle ? 'yes' : 'no'} on line ${entry.cycleRow}`);
       else if (entry.cycle === undefined) { entry.cycle = cycle; entry.cycleRow = line; }
     }
-    entry.points.push({ label: cell(columns.label), kind, value });
+    entry.points.push({ label: cell(columns.label), kind, value, sigma });
     pathways.set(name, entry);
   }
   if (errors.length > 0) return { ok: false, errors };
@@ -94,7 +99,7 @@ export function importTable(text: string, title = 'Imported table'): TableImport
       return {
         id: `pathway-${i + 1}`, name, cycle: entry.cycle ?? false,
         points: entry.points.map((p, j) => {
-          const energy: EnergySpec = { mode: 'value', value: p.value - base, unit: columns.unit, quantity: columns.quantity };
+          const energy: EnergySpec = { mode: 'value', value: p.value - base, unit: columns.unit, quantity: columns.quantity, ...(p.sigma === undefined ? {} : { sigma: p.sigma }) };
           return { id: `p${j + 1}`, label: p.label, kind: p.kind, energy };
         }),
       };

@@ -22,6 +22,8 @@ export const Unit = z.enum(ENERGY_UNITS, { error: (i) => `expected one of ${ENER
 export const Quantity = z.enum(['E', 'H', 'G'], { error: (i) => `expected E, H or G, got ${describe(i.input)}` });
 export const PointKind = z.enum(['min', 'ts'], { error: (i) => `expected "min" or "ts", got ${describe(i.input)}` });
 const positive = (what: string) => finite(what).refine((v) => v > 0, { message: `expected a positive number${what}` });
+/** Optional standard uncertainty σ ≥ 0 of the value beside it, in that value's unit (issue 18). */
+const sigma = (what: string) => finite(what).refine((v) => v >= 0, { message: `expected a standard uncertainty ≥ 0${what}` }).optional();
 
 /** One species count inside a state: `{ species: "cat", count: 1 }`. */
 export const SpeciesTerm = z.strictObject({
@@ -47,6 +49,9 @@ export const Structure = z.strictObject({
   singlePoint: bounded('absoluteEnergyHartree', ' in hartree').optional(),
   hCorrection: bounded('correctionHartree', ' in hartree').optional(),
   gCorrection: bounded('correctionHartree', ' in hartree').optional(),
+  /** σ of the electronic (or single-point) energy, and of the thermal correction used, in hartree. */
+  sigma: sigma(' in hartree'),
+  correctionSigma: sigma(' in hartree'),
   /** Harmonic frequencies in cm⁻¹ (imaginary ones negative), when read from an output. */
   frequencies: z.array(finite(' in cm⁻¹')).optional(),
   /**
@@ -107,20 +112,22 @@ export const Species = z.strictObject({
     dfH: bounded('relativeEnergyKJ', ' in kJ/mol').optional(),
     S: bounded('entropy', ' in J/(mol K)').optional(),
     dfG: bounded('relativeEnergyKJ', ' in kJ/mol').optional(),
+    dfHSigma: sigma(' in kJ/mol'),
+    dfGSigma: sigma(' in kJ/mol'),
   }).optional(),
 });
 
 const valueIn = finite('');
-const EnergyValue = z.strictObject({ mode: z.literal('value'), value: valueIn, unit: Unit, quantity: Quantity.optional() }).superRefine(checkEnergyField('relativeEnergyKJ', 'value'));
+const EnergyValue = z.strictObject({ mode: z.literal('value'), value: valueIn, unit: Unit, quantity: Quantity.optional(), sigma: sigma('') }).superRefine(checkEnergyField('relativeEnergyKJ', 'value'));
 const EnergySpecies = z.strictObject({ mode: z.literal('species'), terms: z.array(SpeciesTerm).min(1, 'expected at least one species') });
 const EnergyFormation = z.strictObject({ mode: z.literal('formation'), terms: z.array(SpeciesTerm).min(1, 'expected at least one species') });
-const EnergyStep = z.strictObject({ mode: z.literal('step'), value: valueIn, unit: Unit, quantity: Quantity.optional() }).superRefine(checkEnergyField('relativeEnergyKJ', 'value'));
-const EnergyBarrier = z.strictObject({ mode: z.literal('barrier'), value: valueIn, unit: Unit, quantity: Quantity.optional() }).superRefine(checkEnergyField('relativeEnergyKJ', 'value'));
+const EnergyStep = z.strictObject({ mode: z.literal('step'), value: valueIn, unit: Unit, quantity: Quantity.optional(), sigma: sigma('') }).superRefine(checkEnergyField('relativeEnergyKJ', 'value'));
+const EnergyBarrier = z.strictObject({ mode: z.literal('barrier'), value: valueIn, unit: Unit, quantity: Quantity.optional(), sigma: sigma('') }).superRefine(checkEnergyField('relativeEnergyKJ', 'value'));
 
 const RatePoint = z.strictObject({ temperatureK: bounded('temperatureK', ' in K'), k: bounded('rateConstant', ' (rate constant)') });
 export const Estimate = z.discriminatedUnion('method', [
-  z.strictObject({ method: z.literal('marcus'), lambda: positive(''), unit: Unit }).superRefine(checkEnergyField('reorganisationKJ', 'lambda')),
-  z.strictObject({ method: z.literal('bep'), e0: valueIn, alpha: bounded('bepSlope'), unit: Unit }).superRefine(checkEnergyField('relativeEnergyKJ', 'e0')),
+  z.strictObject({ method: z.literal('marcus'), lambda: positive(''), unit: Unit, lambdaSigma: sigma('') }).superRefine(checkEnergyField('reorganisationKJ', 'lambda')),
+  z.strictObject({ method: z.literal('bep'), e0: valueIn, alpha: bounded('bepSlope'), unit: Unit, e0Sigma: sigma('') }).superRefine(checkEnergyField('relativeEnergyKJ', 'e0')),
   z.strictObject({ method: z.literal('rateConstant'), k: bounded('rateConstant', ' (rate constant)'), molecularity: z.int().min(1).max(3).default(1), temperatureK: bounded('temperatureK', ' in K').optional() }),
   z.strictObject({ method: z.literal('halfLife'), seconds: bounded('timeSeconds', ' in s'), temperatureK: bounded('temperatureK', ' in K').optional() }),
   z.strictObject({ method: z.literal('eyringFit'), data: z.array(RatePoint).min(2, 'expected at least two (T, k) points') }),
@@ -192,6 +199,13 @@ export const Settings = z.strictObject({
     z.strictObject({ kind: z.literal('point'), pathway: z.string(), point: z.string() }),
     z.strictObject({ kind: z.literal('species'), terms: z.array(SpeciesTerm).min(1, 'expected at least one species') }),
   ]).default({ kind: 'zero' }),
+  /** Monte Carlo settings (issue 18); `defaultSigma` applies to entered energies that carry no σ of their own. */
+  uncertainty: z.strictObject({
+    defaultSigma: sigma(''),
+    defaultSigmaUnit: Unit.default('kcal/mol'),
+    samples: z.int().min(10).max(1_000_000).default(10_000),
+    seed: z.int().min(0).max(4_294_967_295).default(1),
+  }).optional(),
 });
 
 export const Figure = z.strictObject({
@@ -213,6 +227,8 @@ export const Figure = z.strictObject({
     side: z.enum(['above', 'below']).default('above'),
     sizeMm: positive(' in mm').refine((v) => outsideHard('lengthMm', v) === null, { message: `expected a drawing size up to ${BOUNDS.lengthMm.hard[1]} mm` }).optional(),
   }).optional(),
+  /** Error bars on the levels from the Monte Carlo (issue 18): ±σ of each resolved energy, or its 95 % interval; absent: none. */
+  errorBars: z.enum(['sigma', 'interval']).optional(),
   annotations: z.array(z.discriminatedUnion('type', [
     z.strictObject({ type: z.literal('barrier'), pathway: z.string(), from: z.string(), to: z.string() }),
     z.strictObject({ type: z.literal('span'), pathway: z.string() }),

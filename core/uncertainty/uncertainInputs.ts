@@ -1,0 +1,97 @@
+import type { Document, Unit } from '../model/schema.ts';
+import { toJoulesPerMol, unitLabel } from '../units/energy.ts';
+
+/** Where a sampled deviation is added in the document. */
+export type InputTarget =
+  | { kind: 'point'; pathway: number; point: number; field: 'value' | 'lambda' | 'e0' }
+  | { kind: 'structure'; species: number; structure: number; field: 'energy' | 'correction' }
+  | { kind: 'species'; species: number }
+  | { kind: 'formation'; species: number; field: 'dfH' | 'dfG' };
+
+/** One entered number with a standard uncertainty: the inputs the Monte Carlo perturbs. */
+export interface UncertainInput {
+  /** Stable key, e.g. "cycle/T3/value" or "species cat/energy". */
+  key: string;
+  /** What a chemist reads, e.g. "T3: barrier". */
+  label: string;
+  /** σ in the unit the value was entered in. */
+  sigma: number;
+  unit: Unit;
+  /** σ in J/mol. */
+  sigmaJ: number;
+  /** True when σ is the document's default, not one typed beside the value. */
+  isDefault: boolean;
+  target: InputTarget;
+}
+
+const make = (key: string, label: string, sigma: number, unit: Unit, isDefault: boolean, target: InputTarget): UncertainInput =>
+  ({ key, label, sigma, unit, sigmaJ: toJoulesPerMol(sigma, unit), isDefault, target });
+
+/** Is point `qi` of pathway `pi` a reference state (its typed value defines zero)? */
+function isReference(doc: Document, pi: number, qi: number): boolean {
+  const ref = doc.settings.reference;
+  if (ref.kind === 'first') return qi === 0;
+  return doc.pathways[pi]!.id === ref.pathway && doc.pathways[pi]!.points[qi]!.id === ref.point;
+}
+
+/**
+ * Every uncertain input of a document, in a fixed order (so a seed gives the same samples).
+ * σ attaches to what was entered, so correlations follow by construction: a species shared by
+ * two states moves both; a step's σ moves every later point resolved from it. The document's
+ * default σ (settings.uncertainty.defaultSigma, off unless stated) applies to typed values
+ * (not a reference state's, which defines zero), steps, barriers, each species' energy as a
+ * whole, and formation values that carry no σ of their own; estimates only take explicit σ.
+ */
+export function uncertainInputs(doc: Document): UncertainInput[] {
+  const out: UncertainInput[] = [];
+  const u = doc.settings.uncertainty;
+  const fallback = u?.defaultSigma !== undefined && u.defaultSigma > 0 ? { sigma: u.defaultSigma, unit: u.defaultSigmaUnit } : null;
+  const kj = 'kJ/mol' as const;
+  const hartreeFallback = fallback && toJoulesPerMol(fallback.sigma, fallback.unit) / toJoulesPerMol(1, 'hartree');
+  const kjFallback = fallback && toJoulesPerMol(fallback.sigma, fallback.unit) / 1000;
+  doc.pathways.forEach((pathway, pi) => pathway.points.forEach((point, qi) => {
+    const e = point.energy;
+    const key = `${pathway.id}/${point.id}`;
+    const name = `${point.label || point.id} (${pathway.name || pathway.id})`;
+    const target = (field: 'value' | 'lambda' | 'e0'): InputTarget => ({ kind: 'point', pathway: pi, point: qi, field });
+    if (e.mode === 'value' || e.mode === 'step' || e.mode === 'barrier') {
+      const what = e.mode === 'value' ? 'typed value' : e.mode;
+      if (e.sigma !== undefined && e.sigma > 0) out.push(make(`${key}/value`, `${name}: ${what}`, e.sigma, e.unit, false, target('value')));
+      else if (e.sigma === undefined && fallback && !(e.mode === 'value' && isReference(doc, pi, qi))) {
+        out.push(make(`${key}/value`, `${name}: ${what}`, fallback.sigma, fallback.unit, true, target('value')));
+      }
+    } else if (e.mode === 'estimate') {
+      const est = e.estimate;
+      if (est.method === 'marcus' && est.lambdaSigma) out.push(make(`${key}/lambda`, `${name}: Marcus λ`, est.lambdaSigma, est.unit, false, target('lambda')));
+      if (est.method === 'bep' && est.e0Sigma) out.push(make(`${key}/e0`, `${name}: BEP E₀`, est.e0Sigma, est.unit, false, target('e0')));
+    }
+  }));
+  doc.species.forEach((species, si) => {
+    const name = species.label || species.id;
+    let explicit = false;
+    species.structures.forEach((s, ti) => {
+      const which = species.structures.length > 1 ? ` conformer ${ti + 1}` : '';
+      if (s.sigma !== undefined) explicit = true;
+      if (s.correctionSigma !== undefined) explicit = true;
+      if (s.sigma) out.push(make(`species ${species.id}/${ti}/energy`, `${name}${which}: energy`, s.sigma, 'hartree', false, { kind: 'structure', species: si, structure: ti, field: 'energy' }));
+      if (s.correctionSigma) out.push(make(`species ${species.id}/${ti}/correction`, `${name}${which}: thermal correction`, s.correctionSigma, 'hartree', false, { kind: 'structure', species: si, structure: ti, field: 'correction' }));
+    });
+    if (!explicit && hartreeFallback && species.structures.length > 0) {
+      out.push(make(`species ${species.id}/energy`, `${name}: energy`, hartreeFallback, 'hartree', true, { kind: 'species', species: si }));
+    }
+    const f = species.formation;
+    for (const field of ['dfH', 'dfG'] as const) {
+      if (f?.[field] === undefined) continue;
+      const given = f[`${field}Sigma`];
+      const symbol = field === 'dfH' ? 'ΔfH°' : 'ΔfG°';
+      if (given) out.push(make(`species ${species.id}/${field}`, `${name}: ${symbol}`, given, kj, false, { kind: 'formation', species: si, field }));
+      else if (given === undefined && kjFallback) out.push(make(`species ${species.id}/${field}`, `${name}: ${symbol}`, kjFallback, kj, true, { kind: 'formation', species: si, field }));
+    }
+  });
+  return out;
+}
+
+/** "σ 1.0 kcal/mol" for messages. */
+export function describeSigma(input: UncertainInput): string {
+  return `σ ${input.sigma} ${unitLabel(input.unit)}${input.isDefault ? ' (default)' : ''}`;
+}

@@ -1,0 +1,57 @@
+// The uncertainty panel: a default σ typed in the Analysis tab starts a Monte Carlo run in a
+// Web Worker; the page stays responsive while it samples, and the result states N, seed and
+// intervals. The demo is an invented scenario (assets/demo/demo.passline).
+import { expect, test } from '@playwright/test';
+import { readFileSync } from 'node:fs';
+import { consoleErrors, dropFile, openEditor } from './editorHelpers.ts';
+
+const demo = JSON.parse(readFileSync(new URL('../../assets/demo/demo.passline', import.meta.url), 'utf8'));
+
+test.afterEach(({ page }) => { expect(consoleErrors.get(page)).toEqual([]); });
+
+test('a default σ gives intervals and TDTS odds, with N and the seed stated', async ({ page }) => {
+  await openEditor(page);
+  demo.settings.uncertainty = { samples: 2000, seed: 4 };
+  await dropFile(page, JSON.stringify(demo), 'demo.passline');
+  const panel = page.getByRole('region', { name: /How sure is this/ });
+  await expect(panel.getByRole('status')).toContainText('No entered energy carries a σ');
+  await panel.getByRole('textbox', { name: 'Default σ for entered energies' }).fill('1.5');
+  await expect(panel.getByRole('status')).toContainText('N = 2000 samples, seed 4', { timeout: 20_000 });
+  const thermal = panel.getByRole('table', { name: 'Uncertainty of Thermal' });
+  // A typed TS with σ 1.5 kcal/mol over a reference that defines zero: median ≈ 31.8, interval ≈ ±1.96 × 1.5.
+  const barrier = thermal.getByRole('row', { name: /Effective barrier/ });
+  await expect(barrier.getByRole('cell').first()).toHaveText(/^3[12]\.\d$/);
+  await expect(barrier.getByRole('cell').nth(1)).toHaveText(/^2[89]\.\d to 3[45]\.\d$/);
+  await expect(panel.getByRole('table', { name: 'Uncertainty of LA cycle' }).getByRole('row', { name: /TDTS is/ })).toContainText('%');
+});
+
+test('sampling runs off the page: no long task while the worker samples', async ({ page }) => {
+  await openEditor(page);
+  demo.settings.uncertainty = { samples: 200000, seed: 1, defaultSigma: 1 };
+  await page.evaluate(() => {
+    (window as unknown as { longTasks: number[] }).longTasks = [];
+    new PerformanceObserver((list) => { for (const e of list.getEntries()) (window as unknown as { longTasks: number[] }).longTasks.push(e.duration); }).observe({ type: 'longtask' });
+  });
+  await dropFile(page, JSON.stringify(demo), 'demo.passline');
+  const panel = page.getByRole('region', { name: /How sure is this/ });
+  await expect(panel.getByRole('status')).toContainText('Sampling', { timeout: 20_000 });
+  // The run is in a dedicated worker, not in slices on the page.
+  expect(page.workers().map((w) => w.url())).toEqual([expect.stringMatching(/uncertaintyWorker/)]);
+  await page.evaluate(() => { (window as unknown as { longTasks: number[] }).longTasks = []; });
+  await page.waitForTimeout(1500);
+  await expect(panel.getByRole('status')).toContainText('Sampling');
+  const long = await page.evaluate(() => (window as unknown as { longTasks: number[] }).longTasks);
+  // A frame is 16 ms; the renderer counts tasks over 50 ms as long. Allow short ones from a loaded machine, none over 250 ms.
+  expect(long.filter((d) => d > 250)).toEqual([]);
+});
+
+test('looks right at 1280 × 800', async ({ page }) => {
+  await openEditor(page);
+  await page.setViewportSize({ width: 1280, height: 800 });
+  demo.settings.uncertainty = { samples: 2000, seed: 4, defaultSigma: 1.5 };
+  await dropFile(page, JSON.stringify(demo), 'demo.passline');
+  const panel = page.getByRole('region', { name: /How sure is this/ });
+  await expect(panel.getByRole('status')).toContainText('N = 2000 samples', { timeout: 20_000 });
+  await panel.scrollIntoViewIfNeeded();
+  await page.screenshot({ path: 'test-results/uncertainty-panel.png' });
+});

@@ -31,7 +31,10 @@ const make = (key: string, label: string, sigma: number, unit: Unit, isDefault: 
 function isReference(doc: Document, pi: number, qi: number): boolean {
   const ref = doc.settings.reference;
   if (ref.kind === 'first') return qi === 0;
-  return doc.pathways[pi]!.id === ref.pathway && doc.pathways[pi]!.points[qi]!.id === ref.point;
+  if (ref.kind === 'point') return doc.pathways[pi]!.id === ref.pathway && doc.pathways[pi]!.points[qi]!.id === ref.point;
+  // One document-wide zero: a pathway's first state typed as 0 is where that zero sits.
+  const energy = doc.pathways[pi]!.points[qi]!.energy;
+  return ref.kind === 'zero' && qi === 0 && energy?.mode === 'value' && energy.value === 0;
 }
 
 /**

@@ -14,6 +14,7 @@ Usage:
       --json           machine-readable output
       --unit U         kcal/mol, kJ/mol, eV, hartree or cm-1
       --temperature K  temperature in kelvin
+      --strict         exit 1 when a finding has severity error
 
   passline thermo TABLE --reaction "CH4(g) + 2 O2(g) -> CO2(g) + 2 H2O(l)" [--temperature K] [--json]
       Reaction thermochemistry by Hess's law from a CSV table of standard formation
@@ -49,4 +50,5 @@ Usage:
   passline --help | --version
 
 Exit status: 0 success, 1 bad input (the message names the file, field or row), 2 bad usage.
+Numbers outside the limits of core/model/bounds.ts are refused with the bound named (see README).
 `;

@@ -13,6 +13,7 @@ import { applySettingOptions, boundedOption } from './options.ts';
 import { readBundledFont } from './fontFile.ts';
 import { writeOutput } from './writeOutput.ts';
 import { documentFindings } from './documentFindings.ts';
+import { noteLargeWork } from './largeWork.ts';
 import { missingGlyphs, missingGlyphsMessage } from '../export/missingGlyphs.ts';
 
 export interface RenderCliOptions {
@@ -52,6 +53,7 @@ export async function runRender(file: string, options: RenderCliOptions, io: Cli
   const problem = checkRenderOptions({ dpi, widthMm });
   if (problem) throw new CliError(`--${problem.replace(/^width/, 'width-mm')}`, EXIT_USAGE);
   const doc = applySettingOptions(loadInput(file, io), options);
+  noteLargeWork('render', doc, io);
   const profile = resolveProfile(doc);
   const findings = documentFindings(doc, profile);
   const blank = findings.find((f) => f.code === 'no-points');

@@ -1,6 +1,7 @@
-import { app, BrowserWindow, dialog, ipcMain, Menu, screen } from 'electron';
+import { app, BrowserWindow, dialog, ipcMain, Menu, protocol, screen } from 'electron';
 import { dirname, join } from 'node:path';
-import { fileURLToPath, pathToFileURL } from 'node:url';
+import { fileURLToPath } from 'node:url';
+import { APP_INDEX_URL, APP_SCHEME, APP_SCHEME_PRIVILEGES, serveAppFile } from './appProtocol.ts';
 import { HOST_COMMAND_CHANNEL } from '../ui/host/hostApi.ts';
 import type { HostCommand } from '../ui/host/hostCommand.ts';
 import { aboutMessage } from './aboutBox.ts';
@@ -25,7 +26,10 @@ import { loadWindowState, trackWindowState } from './windowStateStore.ts';
 // Bundled to electron/dist/main.js; the renderer build sits in dist/renderer at the top.
 const here = dirname(fileURLToPath(import.meta.url));
 const files = { preload: join(here, 'preload.cjs'), rendererIndex: join(here, '..', '..', 'dist', 'renderer', 'index.html') };
-const appUrl = pathToFileURL(files.rendererIndex).href;
+const rendererFolder = dirname(files.rendererIndex);
+const appUrl = APP_INDEX_URL;
+// Before 'ready': the renderer is served from its own privileged scheme, confined to its folder.
+protocol.registerSchemesAsPrivileged([APP_SCHEME_PRIVILEGES]);
 const log = (message: string) => console.warn(`[passline] ${message}`);
 // A separate data folder on request (end-to-end tests, a portable setup); set before any use.
 if (process.env.PASSLINE_USER_DATA) app.setPath('userData', process.env.PASSLINE_USER_DATA);
@@ -129,6 +133,7 @@ if (!app.requestSingleInstanceLock()) {
 
   const drops = new DropRegistry();
   void app.whenReady().then(async () => {
+    protocol.handle(APP_SCHEME, (request) => serveAppFile(rendererFolder, request.url));
     await Promise.all([recent.load(), recovery.begin()]);
     const host = createDesktopHost({
       dialogs,

@@ -5,13 +5,14 @@ export const VERSION: string = pkg.version;
 
 /** Each command's usage and options, printed by `passline COMMAND --help` (and all together by `passline --help`). */
 export const COMMAND_HELP: Record<string, string> = {
-  analyze: `  passline analyze FILE [--json] [--unit U] [--temperature K] [--uncertainty N [--seed S]]
+  analyze: `  passline analyze FILE [--json] [--unit U] [--temperature K] [--strict] [--uncertainty N [--seed S]]
       Resolve every pathway of a .passline document or a CSV/TSV table of points
       (header: pathway,label,kind,G [kcal/mol],cycle) and print the points with
       their energies and provenance, and the consistency findings.
       --json           machine-readable output
       --unit U         kcal/mol, kJ/mol, eV, hartree or cm-1
       --temperature K  temperature in kelvin
+      --strict         exit 1 when a finding has severity error
       --uncertainty N  Monte Carlo over the σ entered beside values (or the document's
                        default σ): median and 95 % interval of every number, P(TDTS),
                        P(faster), and which inputs matter most; N samples (e.g. 10000)
@@ -33,7 +34,7 @@ export const COMMAND_HELP: Record<string, string> = {
       A + B ⇌ C steps are second order), starting from --init SPECIES=CONC.
 `,
   render: `  passline render FILE -o OUT.svg|OUT.pdf|OUT.png [--width-mm W] [--preset single|double|slide]
-                 [--theme colour|greyscale|dark] [--dpi N] [--unit U] [--temperature K] [--watch]
+                 [--theme colour|greyscale|dark] [--dpi N] [--unit U] [--temperature K] [--strict] [--watch]
   passline render FILE... --out-dir DIR --format svg|pdf|png [same options]
       Draw the profile figure: SVG with editable text, vector PDF with the font
       embedded, or PNG at N dots per inch (default 300).
@@ -42,6 +43,7 @@ export const COMMAND_HELP: Record<string, string> = {
                        the rest still rendered; exit status 1 if any failed
       --watch          stay running and render again whenever an input changes
                        (Ctrl+C to stop); each output is replaced in one step
+      --strict         exit 1 (and write nothing) when a finding has severity error
 `,
   report: `  passline report FILE -o OUT.pdf [--unit U] [--temperature K]
       A PDF report: the figure, energies with provenance, steps, effective barriers,
@@ -64,7 +66,8 @@ export const COMMAND_HELP: Record<string, string> = {
 `,
 };
 
-const EXIT_STATUS = 'Exit status: 0 success, 1 bad input (the message names the file, field or row), 2 bad usage.\n';
+const EXIT_STATUS = 'Exit status: 0 success, 1 bad input (the message names the file, field or row), 2 bad usage.\n'
+  + 'Numbers outside the limits of core/model/bounds.ts are refused with the bound named (see README).\n';
 
 /** Text printed by `passline --help`. */
 export const HELP = `passline ${VERSION} — reaction-coordinate energy profiles from the command line

@@ -18,6 +18,7 @@ import { applySettingOptions, boundedOption } from './options.ts';
 import { readBundledFont } from './fontFile.ts';
 import { writeOutput } from './writeOutput.ts';
 import { documentFindings } from './documentFindings.ts';
+import { noteLargeWork } from './largeWork.ts';
 import { missingGlyphs, missingGlyphsMessage } from '../export/missingGlyphs.ts';
 
 export interface RenderCliOptions {
@@ -58,6 +59,7 @@ export async function runRender(file: string, options: RenderCliOptions, io: Cli
   const problem = checkRenderOptions({ dpi, widthMm });
   if (problem) throw new CliError(`--${problem.replace(/^width/, 'width-mm')}`, EXIT_USAGE);
   const doc = applySettingOptions(loadInput(file, io), options);
+  noteLargeWork('render', doc, io);
   const structures = await documentStructures(doc);
   const profile = resolveProfile(structures ? withStructureFormulas(doc, structures) : doc);
   const findings = documentFindings(doc, profile);

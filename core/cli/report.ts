@@ -9,6 +9,7 @@ import { loadInput } from './loadInput.ts';
 import { applySettingOptions } from './options.ts';
 import { readBundledFont } from './fontFile.ts';
 import { writeOutput } from './writeOutput.ts';
+import { noteLargeWork } from './largeWork.ts';
 import { missingGlyphs, missingGlyphsMessage } from '../export/missingGlyphs.ts';
 import { readFontMetrics } from '../figure/font/fontMetrics.ts';
 
@@ -24,6 +25,7 @@ function outputOf(options: ReportCliOptions, allowed: readonly string[], command
 export async function runReport(file: string, options: ReportCliOptions, io: CliIo): Promise<void> {
   const output = outputOf(options, ['.pdf'], 'report');
   const doc = applySettingOptions(loadInput(file, io), options);
+  noteLargeWork('report', doc, io);
   const fontBytes = readBundledFont();
   await writeOutput(output, await renderReport(doc, { fontBytes }), io);
   const metrics = readFontMetrics(fontBytes);

@@ -153,3 +153,13 @@ describe('a reader that goes away early', () => {
     expect(code).toBe(0);
   }, 60_000);
 });
+
+describe('large documents', () => {
+  it('says before long work starts that it will take a while', async () => {
+    const points = Array.from({ length: 601 }, (_, i) => ({ id: `p${i}`, label: `P${i}`, kind: i % 2 ? 'ts' : 'min', energy: { mode: 'value', value: i % 2 ? 10 : 0, unit: 'kcal/mol' } }));
+    const big = JSON.stringify({ format: 'passline', version: 2, pathways: [{ id: 'a', name: 'A', points }] });
+    const r = await run(['scan', 'big.passline', '--count', '2'], { 'big.passline': big });
+    expect(r.code).toBe(0);
+    expect(r.err).toContain('passline scan: 601 points (more than the usual 500); this may take a while…');
+  }, 60_000);
+});

@@ -193,7 +193,7 @@ describe('passline render', () => {
     expect(new TextDecoder('latin1').decode((outputs.get('fig.pdf') as Uint8Array).slice(0, 5))).toBe('%PDF-');
     // PNG signature (ISO/IEC 15948 / W3C PNG spec): 89 50 4E 47 0D 0A 1A 0A.
     expect([...(outputs.get('fig.png') as Uint8Array).slice(0, 8)]).toEqual([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
-  });
+  }, 30_000); // three renders on a loaded 2-core machine
 
   it('report writes a PDF; tables writes Markdown and CSV with units in the headers', async () => {
     expect((await renderRun(['report', 'assets/demo/demo.passline', '-o', 'r.pdf'])).code).toBe(0);

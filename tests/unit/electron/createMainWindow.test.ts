@@ -12,7 +12,7 @@ vi.mock('electron', () => ({
     once(event: string, listener: () => void) { this.record.once.set(event, listener); }
     show() { this.record.shown += 1; }
     maximize() { this.record.maximized += 1; }
-    loadFile(path: string) { this.record.loaded.push(path); return Promise.resolve(); }
+    loadURL(url: string) { this.record.loaded.push(url); return Promise.resolve(); }
   },
 }));
 
@@ -23,7 +23,7 @@ describe('createMainWindow', () => {
     createMainWindow({ preload: '/app/electron/dist/preload.cjs', rendererIndex: '/app/dist/renderer/index.html' });
     const win = created[0]!;
     expect(win.options).toMatchObject({ show: false, webPreferences: { preload: '/app/electron/dist/preload.cjs', contextIsolation: true, sandbox: true, nodeIntegration: false } });
-    expect(win.loaded).toEqual(['/app/dist/renderer/index.html']);
+    expect(win.loaded).toEqual(['passline-app://app/index.html']); // the app scheme, not file://
     expect(win.shown).toBe(0);
     win.once.get('ready-to-show')!();
     expect(win.shown).toBe(1);

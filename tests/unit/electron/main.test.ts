@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { mkdtempSync, rmSync, writeFileSync, existsSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { fileURLToPath, pathToFileURL } from 'node:url';
+import { fileURLToPath } from 'node:url';
 import { HOST_COMMAND_CHANNEL, hostChannels } from '../../../ui/host/hostApi.ts';
 import { DROP_CHANNEL } from '../../../electron/dropRegistry.ts';
 
@@ -15,6 +15,7 @@ writeFileSync(doc, '{"title":"route"}');
 type Listener = (...args: any[]) => any;
 const appEvents = new Map<string, Listener>();
 const handlers = new Map<string, Listener>();
+const schemes = new Map<string, Listener>();
 const windows: FakeWindow[] = [];
 const menus: unknown[] = [];
 let ready = false;
@@ -36,7 +37,7 @@ class FakeWindow {
   on(event: string, listener: Listener) { this.events.set(event, [...(this.events.get(event) ?? []), listener]); }
   emit(event: string, ...args: unknown[]) { for (const listener of this.events.get(event) ?? []) listener(...args); }
   once(_event: string, _listener: Listener) {}
-  loadFile() { return Promise.resolve(); }
+  loadURL() { return Promise.resolve(); }
   show() {}
   close() {
     this.closes += 1;
@@ -68,6 +69,7 @@ vi.mock('electron', () => ({
     on: (event: string, listener: Listener) => void appEvents.set(event, listener),
   },
   BrowserWindow: FakeWindow,
+  protocol: { registerSchemesAsPrivileged: vi.fn(), handle: (scheme: string, listener: Listener) => void schemes.set(scheme, listener) },
   ipcMain: { handle: (channel: string, listener: Listener) => void handlers.set(channel, listener), on: (channel: string, listener: Listener) => void handlers.set(channel, listener) },
   Menu: { buildFromTemplate: (template: unknown) => template, setApplicationMenu: (menu: unknown) => void menus.push(menu) },
   screen: { getAllDisplays: () => [{ workArea: { x: 0, y: 0, width: 1920, height: 1080 } }] },
@@ -88,13 +90,18 @@ afterAll(() => {
 /** Calls an IPC handler as the app's own window would. */
 function invoke(channel: string, ...args: unknown[]) {
   const win = windows[0]!;
-  // main.ts finds the renderer two folders above its own (from electron/dist/ when bundled).
-  const page = pathToFileURL(fileURLToPath(new URL('../../../../dist/renderer/index.html', import.meta.url))).href;
+  const page = 'passline-app://app/index.html';
   const event = { sender: { id: win.webContents.id }, senderFrame: { url: page, parent: null } };
   return handlers.get(channel)!(event, ...args);
 }
 
 describe('main process', () => {
+  it('serves the renderer from its own scheme, confined to the renderer folder', async () => {
+    const serve = schemes.get('passline-app')!;
+    expect((await serve({ url: 'passline-app://app/%2e%2e/%2e%2e/package.json' })).status).toBe(404);
+    expect((await serve({ url: 'passline-app://app/../../../../../../etc/passwd' })).status).toBe(404);
+  });
+
   it('opens a dropped path only after preload announced it from a real drop, from an app window', async () => {
     await expect(invoke(hostChannels.openDroppedFile, doc)).rejects.toThrow('was not dropped on the window');
     const foreign = { sender: { id: 999 }, senderFrame: { url: 'https://example.invalid/', parent: null } };

@@ -1,10 +1,13 @@
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { spawnSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import { main } from '../../../core/cli/main.ts';
 import type { CliIo } from '../../../core/cli/io.ts';
 import { passline } from './cliBin.ts';
 
+
+// Commands load their modules on first use, so the first test of each pays for loading them.
+vi.setConfig({ testTimeout: 30_000 });
 const root = new URL('../../../', import.meta.url).pathname;
 
 /** Runs the CLI in-process against an in-memory file system. */

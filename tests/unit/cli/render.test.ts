@@ -1,9 +1,12 @@
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { main } from '../../../core/cli/main.ts';
 import type { CliIo } from '../../../core/cli/io.ts';
 import { makeDocument, serializeDocument } from '../../../core/model/load.ts';
 
+
+// Commands load their modules on first use, so the first test of each pays for loading them.
+vi.setConfig({ testTimeout: 30_000 });
 const root = new URL('../../../', import.meta.url).pathname;
 
 /** Invented: 10 pathways × 50 points on the one-column preset, far more labels than the page holds. */

@@ -42,12 +42,17 @@ describe('passline render --watch', { timeout: 90_000 }, () => {
       writeFileSync(doc, table('4.0'));
       await until('the re-render after the fix', () => figure().includes('+4.0'));
 
-      // A burst of saves within the debounce time gives one render, of the last one.
+      // A burst of saves within the debounce time is drawn once, from the last save (fewer
+      // renders than saves, rather than exactly one: a loaded machine may pause this process
+      // between two saves for longer than the debounce time).
       const before = wrote(run.stderr());
       for (const ts of ['5.0', '6.0', '7.0', '8.0']) writeFileSync(doc, table(ts));
       await until('the render after the burst', () => figure().includes('+8.0'));
       await new Promise((r) => setTimeout(r, 600));
-      expect(wrote(run.stderr()) - before).toBe(1);
+      expect(wrote(run.stderr()) - before).toBeGreaterThanOrEqual(1);
+      expect(wrote(run.stderr()) - before).toBeLessThan(4);
+    } catch (error) {
+      throw new Error(`${(error as Error).message}\n--- passline's stderr:\n${run.stderr()}`);
     } finally {
       run.child.kill('SIGINT');
     }

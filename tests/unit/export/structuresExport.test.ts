@@ -24,7 +24,8 @@ const table = readStructures(doc, await loadStructureToolkit());
 const scene = layoutFigure(analyseDocument(doc, table).profile, doc, { metrics: fontMetrics(), preset: 'single', structures: pointDepictions(doc, table) });
 const POINTS = ['r', 'ts1', 'int', 'ts2', 'p1', 'p2'];
 
-describe('exports of a figure with structures', () => {
+// PDF writing, rasterising and the toolkit's first layouts take seconds on a busy machine.
+describe('exports of a figure with structures', { timeout: 30_000 }, () => {
   it('SVG: well-formed XML with each drawing’s paths and labels in a named group per point', () => {
     const xml = new window.DOMParser().parseFromString(sceneToSvg(scene), 'image/svg+xml');
     expect(xml.getElementsByTagName('parsererror')).toHaveLength(0);

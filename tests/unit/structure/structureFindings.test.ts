@@ -26,7 +26,8 @@ const hydrolysis = (products: [string, number][], extra: { formula?: string; cha
   ],
 });
 
-describe('structure formulas in the analysis', () => {
+// The toolkit's layouts take seconds on a busy machine.
+describe('structure formulas in the analysis', { timeout: 30_000 }, () => {
   it('balances a mechanism whose species carry only SMILES (no typed formulas)', () => {
     const doc = hydrolysis([['acetate', 1], ['methanol', 1]]);
     const analysis = analyseDocument(doc, readStructures(doc, toolkit));

@@ -53,7 +53,8 @@ function collisions(scene: Scene): string[] {
   return found;
 }
 
-describe('placeStructures (through layoutFigure)', () => {
+// The toolkit's layouts take seconds on a busy machine.
+describe('placeStructures (through layoutFigure)', { timeout: 30_000 }, () => {
   const corpus: [string, Document][] = [['ester hydrolysis', structuresDocument()], ['20 states', manyStructuresDocument(20)], ['2 pathways × 8 states', manyStructuresDocument(8, 2)]];
   for (const [name, doc] of corpus) {
     for (const preset of ['single', 'double', 'slide'] as const) {

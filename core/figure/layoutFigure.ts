@@ -16,6 +16,7 @@ import { pathwayPaint, type PathwayPaint } from './pathwayPaint.ts';
 import { figureSize, PRESETS, type Preset } from './presets.ts';
 import type { Scene, SceneItem } from './scene.ts';
 import { sceneObstacles } from './sceneObstacles.ts';
+import { inLayerOrder } from './sceneLayers.ts';
 import { THEMES, type ThemeName } from './themes.ts';
 import type { PointDrawing } from '../structure/pointDepictions.ts';
 import { grownHeight, structureLayer, structureRoom } from './structures/structureLayer.ts';
@@ -116,7 +117,8 @@ export function layoutFigure(profile: ResolvedProfile, doc: Document, options: L
   items.push(...molecules.items);
   items.push(...key.items);
   if (fig.showCoordinateArrow) items.push(...coordinateArrow(ctx, plot.x, x1, y1 + margin / 2));
-  return { widthMm: size.widthMm, heightMm: size.heightMm, background: theme.background, fontFamily: options.metrics.family, items, omittedLabels: [...placedLabels.omitted, ...molecules.omitted] };
+  // Layer order (connectors under levels under labels, …) so the canvas, SVG and PDF stack alike.
+  return { widthMm: size.widthMm, heightMm: size.heightMm, background: theme.background, fontFamily: options.metrics.family, items: inLayerOrder(items), omittedLabels: [...placedLabels.omitted, ...molecules.omitted] };
 }
 
 /**

@@ -64,6 +64,26 @@ const pdfBytes = (await sceneToPdf(scene, { fontBytes, subsetFont: subsetFontNod
 console.log(`layout + SVG, 10 pathways × 50 points: ${show(svg)} (target < 30 ms); ${scene.omittedLabels.length} of 500 labels left out for want of room`);
 console.log(`PDF with subset font (same scene): ${show(pdf)}, ${(pdfBytes / 1024).toFixed(1)} KB (target < 300 ms)`);
 
+// The issue-11 corpus in every preset and theme: the audit's fault count (target 0) and the time it takes to lay out.
+{
+  const { FIGURE_CORPUS } = await import('../fixtures/figureCorpus.ts');
+  const { resolveProfile } = await import('../../core/profile/resolve.ts');
+  const { auditCounts, auditScene } = await import('../../core/figure/audit/auditScene.ts');
+  let faults = 0;
+  let omitted = 0;
+  let figures = 0;
+  const c = process.cpuUsage();
+  const jobs = FIGURE_CORPUS.flatMap((e) => (['single', 'double', 'slide'] as const).flatMap((preset) => (['colour', 'greyscale', 'dark'] as const).map((theme) => ({ e, preset, theme }))));
+  const scenes = jobs.map(({ e, preset, theme }) => layoutFigure(resolveProfile(e.doc), e.doc, { metrics, preset, theme }));
+  const used = process.cpuUsage(c);
+  for (const s of scenes) {
+    faults += Object.values(auditCounts(auditScene(s))).reduce((a, b) => a + b, 0);
+    omitted += s.omittedLabels.length;
+    figures++;
+  }
+  console.log(`figure corpus: ${figures} figures laid out in ${((used.user + used.system) / 1000).toFixed(0)} ms CPU; audit faults ${faults} (target 0); ${omitted} labels left out for want of room`);
+}
+
 const root = fileURLToPath(new URL('../../', import.meta.url));
 const cli = `${root}core/cli/passline.mjs`;
 const demo = `${root}assets/demo/demo.passline`;

@@ -2,6 +2,7 @@ import type { DocumentAnalysis } from '../../analysis/analyseDocument.ts';
 import type { Scene } from '../../figure/scene.ts';
 import type { Document } from '../../model/schema.ts';
 import type { AnalysisReport } from '../../report/analysisReport.ts';
+import { formatScientific } from '../../format/formatScientific.ts';
 import { unitLabel } from '../../units/energy.ts';
 import { analysisTables } from '../analysisTables.ts';
 import type { Table } from '../tables.ts';
@@ -38,9 +39,12 @@ export function reportContent(pages: ReportPages, doc: Document, analysis: Docum
   section(pages, 'Comparisons', tables.comparisons);
   pages.heading('Methods');
   for (const m of METHODS) pages.paragraph(m);
+  const findings = analysis.findings.length === 0 ? ['No findings.']
+    : analysis.findings.map((f) => `${f.severity} [${f.code}] ${f.message}${f.pathway ? ` (${f.pathway}${f.point ? ` / ${f.point}` : ''})` : ''}`);
+  // The closing sections travel together when they fit on one page, so no page holds only the caution.
+  pages.keepTogether([{ heading: 'Findings', paragraphs: findings }, { heading: 'Caution', paragraphs: [CAUTION] }]);
   pages.heading('Findings');
-  if (analysis.findings.length === 0) pages.paragraph('No findings.');
-  for (const f of analysis.findings) pages.paragraph(`${f.severity} [${f.code}] ${f.message}${f.pathway ? ` (${f.pathway}${f.point ? ` / ${f.point}` : ''})` : ''}`);
+  for (const f of findings) pages.paragraph(f);
   pages.heading('Caution');
   pages.paragraph(CAUTION);
 }
@@ -71,14 +75,13 @@ function stepsForPage(report: AnalysisReport, decimals: number): Table {
 }
 
 function sci(v: number): string {
-  return v.toPrecision(3).replace('-', '\u2212');
+  return formatScientific(v, 3);
 }
 
 function cell(value: string | number | null): string {
   if (value === null) return '—';
   if (typeof value === 'string') return value;
-  // Very large or small numbers read better in scientific notation (4 significant digits).
+  // Very large or small numbers read better as "× 10ⁿ" (4 significant digits), the app's one notation.
   const a = Math.abs(value);
-  const text = a !== 0 && (a >= 1e5 || a < 1e-3) ? value.toExponential(3).replace('e+', 'e') : String(value);
-  return text.replace(/-/g, '\u2212');
+  return a !== 0 && (a >= 1e5 || a < 1e-3) ? formatScientific(value, 4) : String(value).replace(/-/g, '\u2212');
 }

@@ -22,6 +22,9 @@ export const A4: PageSetup = { widthMm: 210, heightMm: 297, marginMm: 18, bodyPt
 
 const INK = '#1A1A1A';
 
+/** Heading size in body sizes (our choice). */
+const HEADING_SCALE = 1.35;
+
 /**
  * Flows report content down pages: headings, wrapped paragraphs, figures and tables.
  * A block that does not fit on the page starts a new one; table rows break across pages
@@ -48,7 +51,7 @@ export class ReportPages {
     this.y = this.setup.marginMm;
   }
 
-  heading(text: string, scale = 1.35): void {
+  heading(text: string, scale = HEADING_SCALE): void {
     const size = this.body * scale;
     this.ensure(this.line(size) * 3);
     this.y += this.line(size) * 0.6;
@@ -56,13 +59,36 @@ export class ReportPages {
     this.y += this.line(size) * 0.2;
   }
 
+  /**
+   * A wrapped paragraph. One that would leave a single line at the top of the next page
+   * (or a single line at the foot of this one) starts on the next page instead, when it fits there.
+   */
   paragraph(text: string, scale = 1): void {
     const size = this.body * scale;
-    for (const l of wrapText(text, this.metrics, size, this.width)) {
+    const lines = wrapText(text, this.metrics, size, this.width);
+    const fit = Math.floor((this.bottom - this.y) / this.line(size));
+    if (fit < lines.length && (lines.length - fit < 2 || fit < 2)) this.ensure(Math.min(this.paragraphHeight(lines.length, size), this.bottom - this.setup.marginMm));
+    for (const l of lines) {
       this.ensure(this.line(size));
       this.write(l, this.setup.marginMm, size);
     }
     this.y += this.line(size) * 0.35;
+  }
+
+  /** Starts a new page unless these sections (heading and paragraphs each) fit on this one; nothing when they would not fit on any page. */
+  keepTogether(sections: readonly { heading: string; paragraphs: readonly string[] }[]): void {
+    const body = this.body;
+    const head = this.body * HEADING_SCALE;
+    let height = 0;
+    for (const s of sections) {
+      height += this.line(head) * (0.8 + wrapText(s.heading, this.metrics, head, this.width).length);
+      for (const p of s.paragraphs) height += this.paragraphHeight(wrapText(p, this.metrics, body, this.width).length, body);
+    }
+    if (height <= this.bottom - this.setup.marginMm) this.ensure(height);
+  }
+
+  private paragraphHeight(lines: number, size: number): number {
+    return this.line(size) * (lines + 0.35);
   }
 
   figure(scene: Scene): void {

@@ -35,8 +35,8 @@ describe('renderReport', () => {
     expect(all).toContain('δE /');
     expect(all).toContain('kcal mol⁻¹');
     expect(all).toContain('22.5');
-    expect(all).toContain('9.94e+3 s⁻¹');
-    expect(all).toContain('1.664e−4');
+    expect(all).toContain('9940 s⁻¹');
+    expect(all).toContain('1.664 × 10⁻⁴');
     expect(all).toContain('298.15 K');
     for (const source of ['Eyring', 'Evans & Polanyi', 'Kozuch & Shaik', 'Marcus', 'Bell', 'Curtin–Hammett', 'CODATA 2018', 'Ben-Naim & Marcus']) expect(all, source).toContain(source);
     expect(all).toMatch(/not a process-safety assessment/);
@@ -53,6 +53,25 @@ describe('renderReport', () => {
       expect(p.ops).not.toContain(OPS.paintInlineImageXObject);
     }
     expect(new TextDecoder('latin1').decode(bytes)).not.toMatch(/\/Subtype\s*\/Image/);
+  });
+
+  it('writes every number in one notation, × 10ⁿ, and keeps notes for developers out of the reader\'s text', async () => {
+    const { doc } = analysedDocument();
+    const pages = await pagesOf(await renderReport(doc, { fontBytes }));
+    const all = pages.map((p) => p.text).join('\n').replace(/\s+/g, ' ');
+    // No e-notation ("2.772e5", "1.39e+4", "8.761e−4") and no long runs of leading zeros ("0.00000250").
+    expect(all).not.toMatch(/\d[eE][+\-−]?\d/);
+    expect(all).not.toMatch(/0\.0000/);
+    expect(all).not.toMatch(/from memory/i);
+    expect(all).toContain('How the numbers in this report were obtained');
+  });
+
+  it('ends on a page that holds more than a trailing paragraph', async () => {
+    const { doc } = analysedDocument();
+    const pages = await pagesOf(await renderReport(doc, { fontBytes }));
+    const last = pages[pages.length - 1]!.text;
+    expect(last).toContain('Findings');
+    expect(last).toContain('Caution');
   });
 
   it('lists only embedded fonts', async () => {
@@ -84,5 +103,23 @@ describe('ReportPages', () => {
     }
     const headers = pages.pages.map((ops) => ops.some((op) => op.op === 'text' && op.text === 'state'));
     expect(headers.slice(1).every(Boolean)).toBe(true);
+  });
+
+  it('moves a paragraph that would leave one line alone to the next page', () => {
+    const pages = new ReportPages(metrics);
+    const line = 'word '.repeat(18).trim();
+    // Fill the first page to two lines short of its foot, then write a three-line paragraph.
+    while (pages.pages.length === 1) pages.paragraph(line);
+    const before = new ReportPages(metrics);
+    for (let k = 0; k < 200; k++) before.paragraph(line);
+    for (const p of before.pages.slice(0, -1)) {
+      const texts = p.filter((op) => op.op === 'text');
+      expect(texts.length).toBeGreaterThan(1);
+    }
+    const split = new ReportPages(metrics);
+    const three = `${line} ${line} ${line}`;
+    for (let k = 0; k < 400 && split.pages.length < 3; k++) split.paragraph(k % 3 ? line : three);
+    // No page begins with the lone last line of a paragraph begun on the page before.
+    for (const p of split.pages.slice(1)) expect(p.filter((op) => op.op === 'text').length).toBeGreaterThan(1);
   });
 });

@@ -72,4 +72,35 @@ describe('sceneToSvg', () => {
     // Base64 of 00 01 00 00 FF FE (RFC 4648 §4) worked by hand: AAEAAP/+
     expect(style).toContain("src:url(data:font/ttf;base64,AAEAAP/+) format('truetype')");
   });
+
+  it('groups the drawing by layer, and each layer by pathway, with readable ids (issue 11)', () => {
+    const { doc, profile } = twoPathways({ preset: 'single' });
+    const xml = parseSvg(sceneToSvg(layoutFigure(profile, doc, { metrics })));
+    const top = [...xml.documentElement.children].filter((e) => e.tagName === 'g').map((g) => g.getAttribute('id'));
+    expect(top).toEqual(['axis', 'connectors', 'levels', 'labels', 'legend']);
+    const group = (id: string) => xml.getElementById(id)!;
+    // A whole pathway's pieces share one class; each layer holds one group per pathway.
+    for (const layer of ['connectors', 'levels', 'labels', 'legend']) {
+      expect([...group(layer).children].map((g) => g.getAttribute('id'))).toEqual([`${layer}-cat`, `${layer}-un`]);
+    }
+    expect(xml.getElementsByClassName('pathway-cat').length).toBe(4);
+    // Every bar of a pathway sits in its levels group, every label line in its labels group, as text.
+    expect(group('levels-cat').getElementsByTagName('path').length).toBe(5);
+    expect([...group('labels-cat').getElementsByTagName('text')].map((t) => t.textContent)).toContain('TS1‡');
+    expect([...group('axis').getElementsByTagName('text')].map((t) => t.textContent)).toContain('Reaction coordinate');
+    expect(group('levels').getElementsByTagName('text').length).toBe(0);
+  });
+
+  it('makes ids from any pathway id, unique and XML-safe', () => {
+    const { doc, profile } = fixture([
+      { id: '1 route/a', name: 'A', points: [['R', 'min', 0], ['T', 'ts', 12], ['P', 'min', -3]] },
+      { id: '1 route?a', name: 'B', points: [['R', 'min', 0], ['T2', 'ts', 9], ['P', 'min', -3]] },
+    ]);
+    const xml = parseSvg(sceneToSvg(layoutFigure(profile, doc, { metrics })));
+    const ids = [...xml.getElementsByTagName('g')].map((g) => g.getAttribute('id')!);
+    expect(new Set(ids).size).toBe(ids.length);
+    for (const id of ids) expect(id).toMatch(/^[A-Za-z_][A-Za-z0-9._-]*$/);
+    expect(ids).toContain('levels-_1_route_a');
+    expect(ids).toContain('levels-_1_route_a-2');
+  });
 });

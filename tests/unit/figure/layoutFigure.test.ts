@@ -4,6 +4,7 @@ import { MM_PER_PT } from '../../../core/figure/scene.ts';
 import { OKABE_ITO } from '../../../core/figure/themes.ts';
 import { fontMetrics } from './fontFixture.ts';
 import { fixture, twoPathways } from './profileFixture.ts';
+import type { PointSpec } from './profileFixture.ts';
 import { barBoxes, intersects, labelBoxes, paths, textOf, texts } from './sceneQueries.ts';
 
 const metrics = fontMetrics();
@@ -112,6 +113,24 @@ describe('layoutFigure', () => {
     expect(dashes.size).toBe(2);
     // Without colour, the levels and labels differ too: black and dark grey (issue 11, rule 5).
     expect(new Set(grey.map((p) => p.stroke!.colour))).toEqual(new Set(['#000000', '#5C5C5C']));
+  });
+
+  it('in greyscale tells four pathways apart by dash, shade and bar weight, and the legend shows each as drawn', () => {
+    const route = (id: string, ts: number) => ({ id, name: `route ${id}`, points: [['R', 'min', 0], [`T${id}`, 'ts', ts], ['P', 'min', -5]] as PointSpec[] });
+    const { doc, profile } = fixture([route('a', 10), route('b', 14), route('c', 18), route('d', 22)], { theme: 'greyscale' });
+    const scene = layoutFigure(profile, doc, { metrics });
+    const look = (role: 'level' | 'connector' | 'legend', pathway: string) => paths(scene, role).filter((p) => p.pathway === pathway).map((p) => p.stroke!);
+    const keys = ['a', 'b', 'c', 'd'].map((id) => {
+      const bar = look('level', `${id}`).find((s) => s.widthMm > 0)!;
+      const dash = JSON.stringify(look('connector', id)[0]!.dashMm ?? 'solid');
+      // The legend's first stroke is its bar sample, the second its connector sample.
+      const [legendBar, legendLine] = look('legend', id);
+      expect([legendBar!.colour, legendBar!.widthMm]).toEqual([bar.colour, bar.widthMm]);
+      expect(JSON.stringify(legendLine!.dashMm ?? 'solid')).toBe(dash);
+      return `${dash}|${bar.colour}|${bar.widthMm}`;
+    });
+    expect(new Set(keys).size).toBe(4);
+    expect(new Set(keys.map((k) => k.split('|')[0])).size).toBe(4);
   });
 
   it('keeps labels off the bars and off each other', () => {

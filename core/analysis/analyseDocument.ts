@@ -77,7 +77,7 @@ function fasterThanDiffusion({ pathway, steps }: PathwayAnalysis): Finding[] {
 export function analyseDocument(doc: Document): DocumentAnalysis {
   const profile = resolveProfile(doc);
   const extra: Finding[] = [];
-  const options = { temperatureK: profile.temperatureK, transmission: doc.settings.transmission };
+  const options = { temperatureK: profile.temperatureK, transmission: doc.settings.transmission, unit: doc.settings.unit };
   const pathways = profile.pathways.map((pathway, i): PathwayAnalysis => {
     const steps = analyseSteps(pathway, { ...options, molecularity: molecularityFromCompositions(doc.pathways[i]!) });
     const effective = effectiveBarrier(pathway);

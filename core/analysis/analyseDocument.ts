@@ -92,7 +92,7 @@ export function analyseDocument(input: Document, structures?: StructureTable | n
  */
 export function analyseResolved(doc: Document, profile: ResolvedProfile): DocumentAnalysis {
   const extra: Finding[] = [];
-  const options = { temperatureK: profile.temperatureK, transmission: doc.settings.transmission };
+  const options = { temperatureK: profile.temperatureK, transmission: doc.settings.transmission, unit: doc.settings.unit };
   const pathways = profile.pathways.map((pathway, i): PathwayAnalysis => {
     const steps = analyseSteps(pathway, { ...options, molecularity: molecularityFromCompositions(doc.pathways[i]!) });
     const effective = effectiveBarrier(pathway);

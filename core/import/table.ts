@@ -8,10 +8,10 @@ export type { TableError } from './tableError.ts';
 
 export type TableImport = { ok: true; doc: Document } | { ok: false; errors: TableError[] };
 
-const KNOWN = ['pathway', 'label', 'kind', 'cycle', 'sigma'] as const;
+const KNOWN = ['pathway', 'label', 'kind', 'cycle', 'sigma', 'reference'] as const;
 const ENERGY_HEADER = /^([EHG])\s*\[(.+)\]$/;
 
-interface Columns { pathway: number; label: number; kind: number; cycle: number; sigma: number; energy: number; quantity: Quantity; unit: Unit }
+interface Columns { pathway: number; label: number; kind: number; cycle: number; sigma: number; reference: number; energy: number; quantity: Quantity; unit: Unit }
 
 function readHeader(cells: string[], line: number): Columns | TableError[] {
   const errors: TableError[] = [];
@@ -27,7 +27,7 @@ function readHeader(cells: string[], line: number): Columns | TableError[] {
       else if (energy) errors.push({ row: line, column: cell, value: cell, message: 'a second energy column; give one energy column per table' });
       else energy = { index, quantity: match[1] as Quantity, unit };
     } else {
-      errors.push({ row: line, column: cell || `column ${index + 1}`, value: cell, message: 'unknown column; expected pathway, label, kind, cycle, sigma and one energy column such as "G [kcal/mol]"' });
+      errors.push({ row: line, column: cell || `column ${index + 1}`, value: cell, message: 'unknown column; expected pathway, label, kind, cycle, sigma, reference and one energy column such as "G [kcal/mol]"' });
     }
   });
   for (const name of ['pathway', 'label', 'kind'] as const) {
@@ -37,7 +37,7 @@ function readHeader(cells: string[], line: number): Columns | TableError[] {
     errors.push({ row: line, column: 'energy', value: '', message: 'missing an energy column such as "G [kcal/mol]" (E, H or G, unit in brackets)' });
   }
   if (errors.length > 0 || !energy) return errors;
-  return { pathway: at.pathway!, label: at.label!, kind: at.kind!, cycle: at.cycle ?? -1, sigma: at.sigma ?? -1, energy: energy.index, quantity: energy.quantity, unit: energy.unit };
+  return { pathway: at.pathway!, label: at.label!, kind: at.kind!, cycle: at.cycle ?? -1, sigma: at.sigma ?? -1, reference: at.reference ?? -1, energy: energy.index, quantity: energy.quantity, unit: energy.unit };
 }
 
 function readCycle(cell: string): boolean | undefined {
@@ -49,9 +49,11 @@ function readCycle(cell: string): boolean | undefined {
 
 /**
  * Imports a table with one row per stationary point (header
- * `pathway,label,kind,G [kcal/mol],cycle`) into a new document. Hartree values are
- * absolute and become relative to each pathway's first point. All or nothing: any bad
- * row makes the whole import fail with every problem listed.
+ * `pathway,label,kind,G [kcal/mol],cycle`) into a new document. The reference: an optional
+ * `reference` column with `yes` on one row makes that point the shared zero of every pathway;
+ * without it the document-wide zero applies — typed values as typed, hartree values (absolute)
+ * relative to the table's first row. All or nothing: any bad row makes the whole import fail
+ * with every problem listed.
  */
 export function importTable(text: string, title = 'Imported table'): TableImport {
   const { delimiter, rows } = readDelimited(text);
@@ -61,6 +63,7 @@ export function importTable(text: string, title = 'Imported table'): TableImport
   if (Array.isArray(columns)) return { ok: false, errors: columns };
   const errors: TableError[] = [];
   const pathways = new Map<string, { cycle: boolean | undefined; cycleRow: number; points: { label: string; kind: 'min' | 'ts'; value: number; sigma: number | undefined }[] }>();
+  let referenceRow: { line: number; pathway: string; index: number } | undefined;
   for (const { line, cells } of rows.slice(1)) {
     const cell = (i: number) => (i >= 0 ? cells[i] ?? '' : '');
     const fail = (column: string, value: string, message: string) => errors.push({ row: line, column, value, message });
@@ -85,17 +88,25 @@ export function importTable(text: string, title = 'Imported table'): TableImport
       if (entry.cycle !== undefined && entry.cycle !== cycle) fail('cycle', cell(columns.cycle), `pathway "${name}" was marked ${entry.cycle ? 'yes' : 'no'} on line ${entry.cycleRow}`);
       else if (entry.cycle === undefined) { entry.cycle = cycle; entry.cycleRow = line; }
     }
+    const isReference = columns.reference >= 0 ? readCycle(cell(columns.reference)) : false;
+    if (isReference === undefined) { fail('reference', cell(columns.reference), 'expected yes or no'); continue; }
+    if (isReference && referenceRow) { fail('reference', cell(columns.reference), `only one row can be the reference; line ${referenceRow.line} already is`); continue; }
+    if (isReference) referenceRow = { line, pathway: name, index: entry.points.length };
     entry.points.push({ label: cell(columns.label), kind, value, sigma });
     pathways.set(name, entry);
   }
   if (errors.length > 0) return { ok: false, errors };
   if (pathways.size === 0) return { ok: false, errors: [{ row: header.line, column: '', value: '', message: 'the table has a header but no rows' }] };
   const absolute = columns.unit === 'hartree';
+  const list = [...pathways];
+  const refIndex = referenceRow ? list.findIndex(([name]) => name === referenceRow!.pathway) : -1;
+  // Absolute values need a zero of their own: the reference row, else the table's first row.
+  const base = absolute ? (referenceRow ? list[refIndex]![1].points[referenceRow.index]!.value : list[0]![1].points[0]!.value) : 0;
+  const reference = referenceRow ? { kind: 'point' as const, pathway: `pathway-${refIndex + 1}`, point: `p${referenceRow.index + 1}` } : { kind: 'zero' as const };
   const doc = makeDocument({
     title,
-    settings: { quantity: columns.quantity, unit: absolute ? 'kcal/mol' : columns.unit },
-    pathways: [...pathways].map(([name, entry], i) => {
-      const base = absolute ? entry.points[0]!.value : 0;
+    settings: { quantity: columns.quantity, unit: absolute ? 'kcal/mol' : columns.unit, reference },
+    pathways: list.map(([name, entry], i) => {
       return {
         id: `pathway-${i + 1}`, name, cycle: entry.cycle ?? false,
         points: entry.points.map((p, j) => {

@@ -1,6 +1,8 @@
 import type { Finding, ResolvedPathway } from '../profile/types.ts';
 import { kbtOverH, rtJoules } from '../units/index.ts';
 import { checkConditions } from './conditions.ts';
+import { quoteEnergy } from './quoteEnergy.ts';
+import type { EnergyUnit } from '../units/energy.ts';
 import { cycleStates, type CycleState } from './cycleStates.ts';
 import { largestSpan, spanSums } from './spanSums.ts';
 
@@ -32,7 +34,11 @@ export interface EnergeticSpan {
   tof: number;
   /** ln |tof| (−Infinity at ΔG_r = 0), finite where tof underflows. */
   logAbsTof: number;
-  /** Energetic span approximation κ(k_BT/h) e^{−δE/RT}. */
+  /**
+   * Energetic span approximation with the exact TOF's sign: κ(k_BT/h) e^{−δE/RT} for an
+   * exergonic cycle (Kozuch & Shaik 2011), 0 at ΔG_r = 0, and for an endergonic cycle the
+   * exact formula with its sum replaced by its largest term, −κ(k_BT/h)(e^{ΔG_r/RT} − 1) e^{−δE/RT}.
+   */
   tofApprox: number;
   /** −RT ln(TOF / (κ k_BT/h)): the single Eyring barrier that gives the same TOF; null unless TOF > 0. */
   apparentBarrierJ: number | null;
@@ -51,7 +57,7 @@ export const SPAN_CONVENTION = 'one turnover is I₁ → T₁ → I₂ → … �
  * space with prefix sums: O(N), no overflow for thousands of states or hundreds of kcal/mol.
  * Input rules are those of `cycleStates` (barrierless steps, raised TSs).
  */
-export function energeticSpan(pathway: ResolvedPathway, options: { temperatureK: number; transmission?: number }): { span: EnergeticSpan | null; findings: Finding[] } {
+export function energeticSpan(pathway: ResolvedPathway, options: { temperatureK: number; transmission?: number; unit?: EnergyUnit }): { span: EnergeticSpan | null; findings: Finding[] } {
   const findings = checkConditions(options);
   if (findings.length > 0) return { span: null, findings };
   const read = cycleStates(pathway);
@@ -79,7 +85,7 @@ export function energeticSpan(pathway: ResolvedPathway, options: { temperatureK:
   const logNumerator = g < 0 ? Math.log(-Math.expm1(g)) : g > 0 ? g + Math.log(-Math.expm1(-g)) : -Infinity;
   const logAbsTof = logPrefactor + logNumerator - sums.logTotal;
   const tof = g === 0 ? 0 : Math.sign(-g) * Math.exp(logAbsTof);
-  if (g > 0) findings.push({ severity: 'warning', code: 'endergonic-cycle', message: `cycle "${pathway.name}" is endergonic (ΔG_r = ${(reactionEnergyJ / 1000).toFixed(2)} kJ/mol > 0): the net turnover runs backwards and the TOF is negative`, pathway: pathway.id });
+  if (g > 0) findings.push({ severity: 'warning', code: 'endergonic-cycle', message: `cycle "${pathway.name}" is endergonic (ΔG_r = ${quoteEnergy(reactionEnergyJ, options.unit)} > 0): the net turnover runs backwards and the TOF is negative`, pathway: pathway.id });
   if (g === 0) findings.push({ severity: 'info', code: 'thermoneutral-cycle', message: `cycle "${pathway.name}" has ΔG_r = 0: no net turnover at equilibrium, TOF = 0`, pathway: pathway.id });
   const control = (states: CycleState[], logs: Float64Array): ControlledState[] =>
     states.map((s, i) => ({ id: s.id, label: s.label, energyJ: s.energyJ, origin: s.origin, xTof: Math.exp(logs[i]! - sums.logTotal) }));
@@ -91,7 +97,7 @@ export function energeticSpan(pathway: ResolvedPathway, options: { temperatureK:
       convention: SPAN_CONVENTION, temperatureK, transmission: kappa, reactionEnergyJ,
       deltaEJ: top.deltaEJ, tdts: transitionStates[top.i]!, tdi: intermediates[top.j]!, tdtsAfterTdi: top.i >= top.j,
       tdtsByControl: mostControlling(tsControl), tdiByControl: mostControlling(intControl),
-      tof, logAbsTof, tofApprox: Math.exp(logPrefactor - top.deltaEJ / rt),
+      tof, logAbsTof, tofApprox: g < 0 ? Math.exp(logPrefactor - top.deltaEJ / rt) : g === 0 ? 0 : -Math.exp(logPrefactor + logNumerator - top.deltaEJ / rt),
       apparentBarrierJ: tof > 0 ? rt * (sums.logTotal - logNumerator) : null,
       transitionStates: tsControl, intermediates: intControl,
     },

@@ -18,8 +18,10 @@ export interface ChannelShare {
   percent: number;
 }
 
-/** Ratio, er and ee of the first two channels. */
+/** Ratio, er and ee of the two major products (the two largest shares, in list order). */
 export interface PairSelectivity {
+  /** Ids of the two channels the ratio is about, [first, second] in list order. */
+  of: [string, string];
   /** [first]/[second]. */
   ratio: number;
   /** G_eff(second) − G_eff(first), J/mol. */
@@ -29,6 +31,8 @@ export interface PairSelectivity {
   /** Excess of the major product, a fraction in [0, 1). */
   ee: number;
   major: string;
+  /** The other of the two. */
+  minor: string;
 }
 
 /**
@@ -42,12 +46,14 @@ export function productDistribution(channels: readonly SelectivityChannel[], tem
   const effective = channels.map((c) => boltzmannEnergy(c.tsEnergiesJ, temperatureK));
   const fractions = boltzmannPopulations(effective, temperatureK);
   const shares = channels.map((c, i) => ({ id: c.id, label: c.label, effectiveTsJ: effective[i]!, fraction: fractions[i]!, percent: 100 * fractions[i]! }));
-  const [a, b] = shares;
-  if (a === undefined || b === undefined) return { channels: shares, pair: null };
+  if (shares.length < 2) return { channels: shares, pair: null };
+  // The two largest shares; with three or more products the ratio describes those two, named.
+  const top = [...shares.keys()].sort((i, j) => shares[j]!.fraction - shares[i]!.fraction || i - j).slice(0, 2).sort((i, j) => i - j);
+  const a = shares[top[0]!]!, b = shares[top[1]!]!;
   const ddgJ = b.effectiveTsJ - a.effectiveTsJ;
   const ratio = ratioFromDdg(ddgJ, temperatureK);
   return {
     channels: shares,
-    pair: { ratio, ddgJ, er: Math.max(ratio, 1 / ratio), ee: Math.abs(eeFromDdg(ddgJ, temperatureK)), major: ddgJ >= 0 ? a.id : b.id },
+    pair: { of: [a.id, b.id], ratio, ddgJ, er: Math.max(ratio, 1 / ratio), ee: Math.abs(eeFromDdg(ddgJ, temperatureK)), major: ddgJ >= 0 ? a.id : b.id, minor: ddgJ >= 0 ? b.id : a.id },
   };
 }

@@ -3,6 +3,7 @@ import { checkConditions, readMolecularity } from './conditions.ts';
 import { halfLifeFirstOrder, logEquilibriumConstant, logEyringRate, rateUnit, type RateUnit } from './eyring.ts';
 import { splitSteps, type StepShape } from './steps.ts';
 import { stepTopEnergy } from './stepTopEnergy.ts';
+import { quoteEnergy } from './quoteEnergy.ts';
 import type { KineticsOptions, Molecularity, PointRef } from './types.ts';
 
 /** Energetics and Eyring rates of one step; energy-derived values are null when an energy is unknown. */
@@ -38,7 +39,6 @@ export interface KineticStep {
 }
 
 const ref = (p: ResolvedPoint): PointRef => ({ id: p.id, label: p.label });
-const kj = (j: number) => `${(j / 1000).toFixed(2)} kJ/mol`;
 
 /**
  * Steps of a pathway with barriers, Eyring rate constants both ways, K and half-life.
@@ -70,7 +70,7 @@ function stepKinetics(pathway: ResolvedPathway, shape: StepShape, options: Kinet
   const negativeBarrier = known && shape.ts !== null && stepTopEnergy(a, t, b) > t;
   if (negativeBarrier) {
     const below = t < a ? shape.from : shape.to;
-    findings.push({ severity: 'warning', code: 'ts-below-neighbour', message: `in "${pathway.name}", TS "${shape.ts?.label}" lies ${kj((below.energyJ ?? 0) - t)} below "${below.label}"; the step is treated as barrierless (TS raised to the higher minimum) instead of giving k > κk_BT/h`, pathway: pathway.id, point: key.id });
+    findings.push({ severity: 'warning', code: 'ts-below-neighbour', message: `in "${pathway.name}", TS "${shape.ts?.label}" lies ${quoteEnergy((below.energyJ ?? 0) - t, options.unit)} below "${below.label}"; the step is treated as barrierless (TS raised to the higher minimum) instead of giving k > κk_BT/h`, pathway: pathway.id, point: key.id });
   }
   // Object spreads here were ~20× slower in V8 for long pathways; one literal keeps it O(N) and fast.
   const r = known ? rates(a, t, b, options) : null;

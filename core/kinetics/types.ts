@@ -1,3 +1,4 @@
+import type { EnergyUnit } from '../units/energy.ts';
 /** A point named by its id and label, as results refer to it. */
 export interface PointRef {
   id: string;
@@ -24,4 +25,6 @@ export interface KineticsOptions {
    * step's end minimum when the step has no TS.
    */
   molecularity?: Readonly<Record<string, StepMolecularity>>;
+  /** Unit energies are quoted in inside findings (default kJ/mol): the document's display unit. */
+  unit?: EnergyUnit;
 }

@@ -44,8 +44,11 @@ function evaluate(estimate: Estimate, input: EstimateInput): Outcome {
       if (typeof dH === 'string') return { error: `Bell–Evans–Polanyi estimate ${dH}` };
       const b = bepBarrier(toJoulesPerMol(estimate.e0, estimate.unit), estimate.alpha, dH);
       if (b.alphaOutOfRange) warn(`Bell–Evans–Polanyi α = ${estimate.alpha} lies outside [0, 1]`);
-      if (b.belowThermodynamicLimit) warn(`Bell–Evans–Polanyi estimate ${kcal(b.barrierJ)} is below max(0, ΔH) = ${kcal(Math.max(0, dH))}`);
-      return { barrierJ: b.barrierJ, detail: `Bell–Evans–Polanyi estimate E₀ = ${estimate.e0} ${unitLabel(estimate.unit)}, α = ${estimate.alpha}, ΔH = ${kcal(dH)}`, findings, approximations };
+      // The step energy is in the profile's quantity; BEP lines are drawn against ΔH, so say which was used.
+      const symbol = `Δ${ctx.quantity}`;
+      if (b.belowThermodynamicLimit) warn(`Bell–Evans–Polanyi estimate ${kcal(b.barrierJ)} is below max(0, ${symbol}) = ${kcal(Math.max(0, dH))}`);
+      if (ctx.quantity !== 'H') approximations.push(`Bell–Evans–Polanyi line applied to the step's ${symbol} in place of ΔH`);
+      return { barrierJ: b.barrierJ, detail: `Bell–Evans–Polanyi estimate E₀ = ${estimate.e0} ${unitLabel(estimate.unit)}, α = ${estimate.alpha}, step ${symbol} = ${kcal(dH)}`, findings, approximations };
     }
     case 'rateConstant': {
       const tData = estimate.temperatureK ?? t;

@@ -12,6 +12,8 @@ export interface ReportStep {
   barrierForward: number | null; barrierReverse: number | null; reactionEnergy: number | null;
   kForward: number | null; kReverse: number | null; kForwardUnit: string; kReverseUnit: string;
   equilibriumConstant: number | null; halfLifeSeconds: number | null; barrierless: boolean; negativeBarrier: boolean;
+  /** The forward barrier k uses: the TS raised to the higher neighbouring minimum where it lies below one. */
+  barrierUsed: number | null;
 }
 
 export interface ReportPathway {
@@ -19,7 +21,17 @@ export interface ReportPathway {
   cycle: boolean;
   points: ReportPoint[];
   steps: ReportStep[];
-  effectiveBarrier: { value: number; ts: string; intermediate: string; halfLifeSeconds: number | null; reading: string | null } | null;
+  effectiveBarrier: {
+    value: number; ts: string; intermediate: string; halfLifeSeconds: number | null; reading: string | null;
+    /** The TS was raised to a neighbouring minimum (the rule the step rates use). */
+    tsRaised: boolean;
+    /** True when nothing on the pathway rises above an earlier minimum (every step downhill and barrierless). */
+    noBarrier: boolean;
+    /** What the half-life assumes. */
+    halfLifeOrder: string;
+  } | null;
+  /** Pathways with equal values share one zero. */
+  scale: string;
   reactionEnergy: number | null;
   energeticSpan: null | {
     deltaE: number; tdts: string; tdi: string; tof: number; tofApprox: number; apparentBarrier: number | null;
@@ -29,7 +41,11 @@ export interface ReportPathway {
 
 export type ReportComparison =
   | { type: 'rate'; baseline: string; candidate: string; ddG: number | null; rateRatio: number | null; log10RateRatio: number | null }
-  | { type: 'selectivity'; pathways: string[]; assumption: string | null; products: { pathway: string; percent: number; effectiveTs: number }[]; ratio: number | null; ddG: number | null; er: number | null; ee: number | null };
+  | {
+    type: 'selectivity'; pathways: string[]; assumption: string | null; products: { pathway: string; percent: number; effectiveTs: number }[]; ratio: number | null; ddG: number | null; er: number | null; ee: number | null;
+    /** The two products `ratio` and `ddG` are about ([first]/[second]): the two major ones. */
+    ratioOf: [string, string] | null; major: string | null; minor: string | null;
+  };
 
 /** The machine-readable analysis of a document (the `analyze --json` contract). */
 export interface AnalysisReport {
@@ -37,6 +53,10 @@ export interface AnalysisReport {
   quantity: Quantity;
   unit: Unit;
   temperatureK: number;
+  /** What every energy is measured from. */
+  reference: { kind: string; text: string };
+  /** The standard state every k and K refers to. */
+  standardState: string;
   pathways: ReportPathway[];
   comparisons: ReportComparison[];
   checks: Finding[];
@@ -45,6 +65,20 @@ export interface AnalysisReport {
 /** Labels are shown as written; a label that repeats in a cycle's X_TOF table gets its id. */
 function controlKey(ref: PointRef, taken: Record<string, number>): string {
   return ref.label in taken ? `${ref.label} (${ref.id})` : ref.label;
+}
+
+/** Pseudo-first-order wording for half-lives of effective barriers and bimolecular steps. */
+export const HALF_LIFE_ORDER = 'first order, or pseudo-first order with partners at 1 mol/L';
+
+/** The standard state k and K refer to, from the document's settings. */
+export function rateStandardState(doc: Document): string {
+  const st = doc.settings.standardState;
+  if (st !== 'as-computed') return `c° = 1 mol/L (energies corrected from ${st === '1atm-to-1M' ? '1 atm' : '1 bar'} per species); K and k of steps that change the number of species are in (mol/L) units`;
+  const formation = doc.pathways.some((p) => p.points.some((q) => q.energy.mode === 'formation'));
+  const gas = doc.species.some((s) => s.phase === 'gas');
+  if (formation) return 'p° = 1 bar (standard formation data): K is a pressure-based constant and the (mol/L)-unit k of molecular steps holds only after conversion to c° = 1 mol/L';
+  if (gas) return 'as computed (gas-phase energies, usually 1 atm or 1 bar): the (mol/L)-unit k of molecular steps holds only after conversion to c° = 1 mol/L; choose a 1 mol/L standard state in the settings';
+  return 'as given: the standard state of the input energies; (mol/L)-unit k of molecular steps assume it is c° = 1 mol/L';
 }
 
 /** Builds the analysis report, energies in the document's display unit, rates in SI. */
@@ -59,6 +93,8 @@ export function analysisReport(doc: Document, analysis: DocumentAnalysis): Analy
     quantity: profile.quantity,
     unit,
     temperatureK: profile.temperatureK,
+    reference: profile.reference ?? { kind: doc.settings.reference.kind, text: '' },
+    standardState: rateStandardState(doc),
     pathways: analysis.pathways.map(({ pathway, steps, effectiveBarrier: eb, feasibility, energeticSpan: span }) => {
       const known = pathway.points.filter((p) => p.energyJ !== null);
       const control: Record<string, number> = {};
@@ -72,8 +108,13 @@ export function analysisReport(doc: Document, analysis: DocumentAnalysis): Analy
           barrierForward: en(s.barrierForwardJ), barrierReverse: en(s.barrierReverseJ), reactionEnergy: en(s.reactionEnergyJ),
           kForward: s.kForward, kReverse: s.kReverse, kForwardUnit: s.unitForward, kReverseUnit: s.unitReverse,
           equilibriumConstant: s.equilibriumConstant, halfLifeSeconds: s.halfLifeSeconds, barrierless: s.barrierless, negativeBarrier: s.negativeBarrier,
+          barrierUsed: s.barrierForwardJ === null || s.reactionEnergyJ === null ? null : e(s.negativeBarrier ? Math.max(s.barrierForwardJ, 0, s.reactionEnergyJ) : s.barrierForwardJ),
         })),
-        effectiveBarrier: eb && { value: e(eb.barrierJ), ts: eb.ts.label, intermediate: eb.intermediate.label, halfLifeSeconds: feasibility?.halfLifeSeconds ?? null, reading: feasibility ? `${feasibility.band} (${feasibility.basis})` : null },
+        effectiveBarrier: eb && {
+          value: e(eb.barrierJ), ts: eb.ts.label, intermediate: eb.intermediate.label, halfLifeSeconds: feasibility?.halfLifeSeconds ?? null, reading: feasibility ? `${feasibility.band} (${feasibility.basis})` : null,
+          tsRaised: eb.tsRaised, noBarrier: eb.barrierJ <= 0, halfLifeOrder: HALF_LIFE_ORDER,
+        },
+        scale: pathway.scaleKey ?? '',
         reactionEnergy: known.length > 1 ? e(known.at(-1)!.energyJ! - known[0]!.energyJ!) : null,
         energeticSpan: span && {
           deltaE: e(span.deltaEJ), tdts: span.tdts.label, tdi: span.tdi.label, tof: span.tof, tofApprox: span.tofApprox,
@@ -87,6 +128,8 @@ export function analysisReport(doc: Document, analysis: DocumentAnalysis): Analy
         type: 'selectivity', pathways: c.pathways.map(nameOf), assumption: c.result?.assumption ?? null,
         products: (c.result?.channels ?? []).map((ch) => ({ pathway: ch.label, percent: ch.percent, effectiveTs: e(ch.effectiveTsJ) })),
         ratio: c.result?.pair?.ratio ?? null, ddG: en(c.result?.pair?.ddgJ ?? null), er: c.result?.pair?.er ?? null, ee: c.enantiomeric ? c.result?.pair?.ee ?? null : null,
+        ratioOf: c.result?.pair ? [nameOf(c.result.pair.of[0]), nameOf(c.result.pair.of[1])] : null,
+        major: c.result?.pair ? nameOf(c.result.pair.major) : null, minor: c.result?.pair ? nameOf(c.result.pair.minor) : null,
       }),
     checks: analysis.findings,
   };

@@ -1,5 +1,5 @@
 import { unitLabel } from '../units/energy.ts';
-import type { AnalysisReport } from './analysisReport.ts';
+import { HALF_LIFE_ORDER, type AnalysisReport } from './analysisReport.ts';
 
 const QUANTITY_SYMBOL = { E: 'ΔE', H: 'ΔH', G: 'ΔG' } as const;
 
@@ -22,7 +22,11 @@ function pad(text: string, width: number): string {
 export function analysisText(report: AnalysisReport, decimals = 1): string {
   const lines: string[] = [];
   const unit = unitLabel(report.unit);
+  const barrier = `${QUANTITY_SYMBOL[report.quantity]}‡`;
   lines.push(`${report.title || 'Untitled'} — ${QUANTITY_SYMBOL[report.quantity]} / ${unit} at ${report.temperatureK} K`);
+  if (report.reference.text) lines.push(`reference: ${report.reference.text}`);
+  lines.push(`k and K: ${report.standardState}`);
+  if (report.quantity !== 'G') lines.push(`rates below are estimates: Eyring k, t½ and TOF need Gibbs energies, and this profile is in ${report.quantity} (${barrier} used in place of ΔG‡)`);
   for (const pathway of report.pathways) {
     lines.push('', `${pathway.name}${pathway.cycle ? ' (catalytic cycle)' : ''}`);
     const width = Math.max(5, ...pathway.points.map((p) => p.label.length)) + 2;
@@ -31,10 +35,13 @@ export function analysisText(report: AnalysisReport, decimals = 1): string {
     }
     for (const s of pathway.steps) {
       const name = `${s.from} → ${s.ts ? `${s.ts} → ` : ''}${s.to}`;
-      lines.push(`  step ${name}: ΔG‡ ${formatEnergy(s.barrierForward, decimals)} / ${formatEnergy(s.barrierReverse, decimals)} back, Δ ${formatEnergy(s.reactionEnergy, decimals)} ${unit}; k ${sci(s.kForward)} ${s.kForwardUnit}, k₋ ${sci(s.kReverse)} ${s.kReverseUnit}${s.barrierless ? ' (barrierless)' : ''}`);
+      const raised = s.negativeBarrier ? ` (k uses ${formatEnergy(s.barrierUsed, decimals)}: TS raised to the higher minimum; drawn ${formatEnergy(s.barrierForward, decimals)} / ${formatEnergy(s.barrierReverse, decimals)})` : '';
+      const shown = s.negativeBarrier ? `${formatEnergy(s.barrierUsed, decimals)}*` : `${formatEnergy(s.barrierForward, decimals)} / ${formatEnergy(s.barrierReverse, decimals)} back`;
+      lines.push(`  step ${name}: ${barrier} ${shown}, Δ ${formatEnergy(s.reactionEnergy, decimals)} ${unit}; k ${sci(s.kForward)} ${s.kForwardUnit}, k₋ ${sci(s.kReverse)} ${s.kReverseUnit}${s.barrierless ? ' (barrierless)' : ''}${raised}`);
     }
     const eb = pathway.effectiveBarrier;
-    if (eb) lines.push(`  effective barrier ${formatEnergy(eb.value, decimals)} ${unit} (${eb.intermediate} → ${eb.ts})${eb.halfLifeSeconds === null ? '' : `, t½ ${sci(eb.halfLifeSeconds)} s: ${eb.reading?.split(' (')[0]} (common practice)`}`);
+    if (eb?.noBarrier) lines.push('  no barrier: nothing on this pathway rises above an earlier minimum');
+    else if (eb) lines.push(`  effective barrier ${formatEnergy(eb.value, decimals)} ${unit} (${eb.intermediate} → ${eb.ts}${eb.tsRaised ? ', TS raised to a neighbouring minimum' : ''})${eb.halfLifeSeconds === null ? '' : `, t½ ${sci(eb.halfLifeSeconds)} s (${HALF_LIFE_ORDER}): ${eb.reading?.split(' (')[0]} (common practice)`}`);
     const span = pathway.energeticSpan;
     if (span) {
       lines.push(`  energetic span δE ${formatEnergy(span.deltaE, decimals)} ${unit}: TDTS ${span.tdts}, TDI ${span.tdi}; TOF ${sci(span.tof)} s⁻¹ (δE approximation ${sci(span.tofApprox)} s⁻¹)`);
@@ -43,7 +50,10 @@ export function analysisText(report: AnalysisReport, decimals = 1): string {
   }
   for (const c of report.comparisons) {
     if (c.type === 'rate') lines.push('', `${c.candidate} vs ${c.baseline}: ΔΔG‡ ${formatEnergy(c.ddG, decimals)} ${unit}, rate ratio ${sci(c.rateRatio)}`);
-    else lines.push('', `selectivity (${c.assumption === null ? 'not available' : 'Curtin–Hammett'}): ${c.products.map((p) => `${p.pathway} ${p.percent.toFixed(1)}%`).join(', ')}${c.ee === null ? '' : `, ee ${(100 * c.ee).toFixed(1)}%`}`);
+    else {
+      const pair = c.ratioOf && c.ratio !== null ? `; ${c.ratioOf[0]} : ${c.ratioOf[1]} = ${sci(c.ratio)}, ΔΔG‡ ${formatEnergy(c.ddG, decimals)} ${unit} (the two major products)` : '';
+      lines.push('', `selectivity (${c.assumption === null ? 'not available' : 'Curtin–Hammett'}): ${c.products.map((p) => `${p.pathway} ${p.percent.toFixed(1)}%`).join(', ')}${pair}${c.ee === null ? '' : `, ee ${(100 * c.ee).toFixed(1)}%`}`);
+    }
   }
   if (report.checks.length > 0) {
     lines.push('', 'Findings');

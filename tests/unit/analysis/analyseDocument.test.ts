@@ -42,7 +42,8 @@ describe('analyseDocument', () => {
     const parsed = parseDocument(readFileSync(new URL('../../../assets/demo/demo.passline', import.meta.url), 'utf8'));
     if (!parsed.ok) throw new Error('demo must load');
     const report = analysisReport(parsed.doc, analyseDocument(parsed.doc));
-    expect(Object.keys(report)).toEqual(['title', 'quantity', 'unit', 'temperatureK', 'pathways', 'comparisons', 'checks']);
+    // Issue 12 added reference and standardState; the earlier keys keep their order and meaning.
+    expect(Object.keys(report)).toEqual(['title', 'quantity', 'unit', 'temperatureK', 'reference', 'standardState', 'pathways', 'comparisons', 'checks']);
     expect(Object.keys(report.pathways[0]!)).toEqual(expect.arrayContaining(['name', 'cycle', 'points', 'steps', 'effectiveBarrier', 'energeticSpan']));
     expect(Object.keys(report.pathways[0]!.steps[0]!)).toEqual(expect.arrayContaining(['from', 'ts', 'to', 'barrierForward', 'barrierReverse', 'reactionEnergy', 'kForward', 'kReverse', 'halfLifeSeconds']));
     const [rate] = report.comparisons;
@@ -95,5 +96,30 @@ describe('analyseDocument', () => {
     expect(analysis.findings[0]!.message).toMatch(/ is \d\.\d\d × 10[¹²³⁴⁵⁶⁷⁸⁹⁰]+ M⁻¹ s⁻¹, above the diffusion limit/);
     const [bind] = analysis.pathways[0]!.steps;
     expect(bind).toMatchObject({ barrierless: true, molecularityForward: 2, unitForward: 'M⁻¹ s⁻¹' });
+  });
+});
+
+describe('analyze wording (issue 12)', () => {
+  it('names the raised barrier k uses, ΔH‡ on an H profile with the estimate caveat, and the standard state', async () => {
+    const { analysisReport } = await import('../../../core/report/analysisReport.ts');
+    const { analysisText } = await import('../../../core/report/analysisText.ts');
+    const { makeDocument: make } = await import('../../../core/model/load.ts');
+    const doc = make({
+      settings: { quantity: 'H' },
+      pathways: [{ id: 'a', name: 'A', points: [
+        { id: 'R', label: 'R', kind: 'min', energy: { mode: 'value', value: 0, unit: 'kcal/mol' } },
+        { id: 'T', label: 'T', kind: 'ts', energy: { mode: 'value', value: 11.4, unit: 'kcal/mol' } },
+        { id: 'P', label: 'P', kind: 'min', energy: { mode: 'value', value: 12.2, unit: 'kcal/mol' } },
+      ] }],
+    });
+    const report = analysisReport(doc, analyseDocument(doc));
+    expect(report.pathways[0]!.steps[0]!.barrierUsed).toBeCloseTo(12.2, 9);
+    expect(report.pathways[0]!.effectiveBarrier).toMatchObject({ tsRaised: true });
+    expect(report.reference.kind).toBe('zero');
+    const text = analysisText(report);
+    expect(text).toContain('ΔH‡ +12.2*');
+    expect(text).toContain('k uses +12.2: TS raised');
+    expect(text).toContain('rates below are estimates');
+    expect(text).not.toContain('ΔG‡ +');
   });
 });

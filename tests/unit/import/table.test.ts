@@ -36,15 +36,24 @@ describe('importTable', () => {
     expect(imported('pathway,label,kind,G [kcal/mol]\nA,R,min,0\nA,T,ts,\u221212.5\n').pathways[0]!.points[1]!.energy).toMatchObject({ value: -12.5 });
   });
 
-  it('makes absolute hartree energies relative to each pathway\'s first point', () => {
+  it('makes absolute hartree energies relative to one document-wide zero: the table\'s first row', () => {
     const doc = imported('pathway,label,kind,E [hartree]\nA,R,min,-500.250000\nA,T,ts,-500.218125\nB,S,min,-100.0\nB,P,min,-100.01\n');
     const [a, b] = doc.pathways;
     const ts = a!.points[1]!.energy as { value: number; unit: string };
     expect(ts.unit).toBe('hartree');
     // 0.031875 E_h = 20.0021 kcal/mol with CODATA 2018 (627.5094740630558 kcal/mol per E_h, REFERENCE.md §1)
     expect(convertEnergy(ts.value, 'hartree', 'kcal/mol')).toBeCloseTo(0.031875 * 627.5094740630558, 6);
-    expect((b!.points[0]!.energy as { value: number }).value).toBe(0);
+    // Old behaviour re-zeroed B to its own first row (0); on the common zero it is −100.0 − (−500.25) E_h.
+    expect((b!.points[0]!.energy as { value: number }).value).toBeCloseTo(400.25, 9);
     expect(doc.settings.unit).toBe('kcal/mol');
+    expect(doc.settings.reference).toEqual({ kind: 'zero' });
+  });
+
+  it('a reference column names the shared zero; hartree values are relative to that row', () => {
+    const doc = imported('pathway,label,kind,E [hartree],reference\nA,R,min,-500.25,no\nA,T,ts,-500.218125,no\nB,S,min,-500.26,yes\n');
+    expect(doc.settings.reference).toEqual({ kind: 'point', pathway: 'pathway-2', point: 'p1' });
+    expect((doc.pathways[0]!.points[0]!.energy as { value: number }).value).toBeCloseTo(0.01, 12);
+    expect(failure('pathway,label,kind,G [kcal/mol],reference\nA,R,min,0,yes\nA,P,min,1,yes\n')[0]!.message).toContain('only one row can be the reference');
   });
 
   it('names line, column and value of every bad cell and imports nothing', () => {

@@ -157,3 +157,16 @@ describe('cycleSteadyState test reference', () => {
     expect(rel(ss.tof, 1.66434592407551e-4)).toBeLessThan(1e-9);
   });
 });
+
+describe('the δE approximation follows the exact TOF\'s sign', () => {
+  it('is negative for an endergonic cycle, 0 at ΔG_r = 0, and quotes ΔG_r in the display unit', async () => {
+    const { energeticSpan } = await import('../../../core/kinetics/index.ts');
+    const { cycle } = await import('./build.ts');
+    const up = energeticSpan(cycle([0, 20, 5, 18, 3]), { temperatureK: 298.15, unit: 'kcal/mol' });
+    expect(up.span!.tof).toBeLessThan(0);
+    expect(up.span!.tofApprox).toBeLessThan(0);
+    expect(up.findings.find((f) => f.code === 'endergonic-cycle')?.message).toContain('3.00 kcal/mol');
+    const flat = energeticSpan(cycle([0, 20, 5, 18, 0]), { temperatureK: 298.15 });
+    expect([flat.span!.tof, flat.span!.tofApprox]).toEqual([0, 0]);
+  });
+});

@@ -84,3 +84,18 @@ describe('productDistribution', () => {
     expect(r.channels.reduce((a, c) => a + c.percent, 0)).toBeCloseTo(100, 10);
   });
 });
+
+describe('productDistribution with three products', () => {
+  it('ratio and ΔΔG‡ describe the two major products, named, not the first two listed', async () => {
+    const { productDistribution } = await import('../../../core/kinetics/productDistribution.ts');
+    // TS 18.0 (minor), 15.0, 16.0 kcal/mol: the two majors differ by 1.0 kcal/mol ⇒ r = 5.407606565 (REFERENCE.md §8).
+    const r = productDistribution([
+      { id: 'x', label: 'X', tsEnergiesJ: [18 * 4184] },
+      { id: 'y', label: 'Y', tsEnergiesJ: [15 * 4184] },
+      { id: 'z', label: 'Z', tsEnergiesJ: [16 * 4184] },
+    ], 298.15);
+    expect(r.pair!.of).toEqual(['y', 'z']);
+    expect([r.pair!.major, r.pair!.minor]).toEqual(['y', 'z']);
+    expect(Math.abs(r.pair!.ratio / 5.407606565 - 1)).toBeLessThan(1e-9);
+  });
+});

@@ -188,6 +188,10 @@ describe('barrier estimates', () => {
   it('Bell–Evans–Polanyi: E₀ = 15, α = 0.40, ΔH = −12 gives 10.2 (REFERENCE.md §7); α outside [0, 1] is flagged', () => {
     close(tsEnergy({ method: 'bep', e0: 15, alpha: 0.4, unit: 'kcal/mol' }, -12), 10.2, 1e-12);
     expect(codes(resolveProfile(around({ method: 'bep', e0: 15, alpha: 1.3, unit: 'kcal/mol' }, -5)))).toContain('estimate-outside-validity');
+    // On a G profile the provenance names the step's ΔG, not ΔH, and states the substitution.
+    const bep = resolveProfile(around({ method: 'bep', e0: 15, alpha: 0.4, unit: 'kcal/mol' }, -12)).pathways[0]!.points[1]!.provenance;
+    expect(bep.detail).toContain('step ΔG =');
+    expect(bep.approximations.join(' ')).toContain('in place of ΔH');
   });
 
   it('inverse Eyring: k = 0.0135881500479 s⁻¹ gives 20.000 kcal/mol; t½ = 1 h gives 22.52199802 (REFERENCE.md §2)', () => {

@@ -48,7 +48,8 @@ export const Species = z.strictObject({
   formula: z.string().optional(),
   charge: finite('').optional(),
   /** How this species enters a standard-state correction. */
-  phase: z.enum(['solute', 'solvent', 'gas', 'none']).default('solute'),
+  /** 'liquid' is a neat liquid reactant: it gets the same neat-liquid standard state as a solvent. */
+  phase: z.enum(['solute', 'solvent', 'liquid', 'gas', 'none']).default('solute'),
   /** Molar concentration of the neat liquid (mol/L) when phase is 'solvent'. */
   neatConcentration: positive(' in mol/L').optional(),
   /** Temperature (K) at which the thermal corrections were computed. */

@@ -9,7 +9,10 @@ export interface CellProblem {
   message: string;
 }
 
-const PHASES = ['solute', 'solvent', 'gas', 'none'] as const;
+const PHASES = ['solute', 'solvent', 'liquid', 'gas', 'none'] as const;
+
+/** The usual state symbols g, l, s, aq (IUPAC Green Book, from memory) as phases; a solid gets no standard-state change. */
+const PHASE_SYMBOLS: Record<string, (typeof PHASES)[number]> = { g: 'gas', l: 'liquid', aq: 'solute', s: 'none', solid: 'none', sln: 'solute' };
 
 /**
  * Builds a species from sheet cells, keeping what the cells do not show (further
@@ -28,8 +31,9 @@ export function speciesFromRow(row: SpeciesRow, base: Species | undefined): { sp
   }
   const id = row.id.trim();
   if (id === '') problems.push({ column: 'id', value: '', message: 'expected a non-empty id' });
-  const phase = row.phase.trim() || 'solute';
-  if (!(PHASES as readonly string[]).includes(phase)) problems.push({ column: 'phase', value: phase, message: `expected one of ${PHASES.join(', ')}` });
+  const typedPhase = row.phase.trim().replace(/^\((.*)\)$/, '$1').toLowerCase() || 'solute';
+  const phase = PHASE_SYMBOLS[typedPhase] ?? typedPhase;
+  if (!(PHASES as readonly string[]).includes(phase)) problems.push({ column: 'phase', value: row.phase.trim(), message: `expected one of ${PHASES.join(', ')} (or g, l, s, aq)` });
   const hasStructure = ['singlePoint', 'hCorrection', 'gCorrection'].some((k) => row[k as SpeciesColumnKey].trim() !== '');
   if (numbers.electronic === undefined && hasStructure && row.electronic.trim() === '') {
     problems.push({ column: 'electronic', value: '', message: 'expected the electronic energy (Eh) when a single point or a correction is given' });

@@ -99,7 +99,8 @@ export const Species = z.strictObject({
   /** Spin multiplicity 2S + 1, when read from a calculation output. */
   multiplicity: z.int().min(1).optional(),
   /** How this species enters a standard-state correction. */
-  phase: z.enum(['solute', 'solvent', 'gas', 'none']).default('solute'),
+  /** 'liquid' is a neat liquid reactant: it gets the same neat-liquid standard state as a solvent. */
+  phase: z.enum(['solute', 'solvent', 'liquid', 'gas', 'none']).default('solute'),
   /** Molar concentration of the neat liquid (mol/L) when phase is 'solvent'. */
   neatConcentration: positive(' in mol/L').pipe(bounded('concentration')).optional(),
   /** Temperature (K) at which the thermal corrections were computed. */

@@ -13,7 +13,8 @@ import { spawn } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import { crowdedDocumentText } from '../fixtures/crowdedDocument.ts';
 
-const PORT = Number(process.env.PASSLINE_E2E_PORT ?? 4176);
+// PASSLINE_BENCH_PORT lets two checkouts run the benchmark side by side.
+const PORT = Number(process.env.PASSLINE_BENCH_PORT ?? 4176);
 const URL_ = `http://127.0.0.1:${PORT}/`;
 
 const quantile = (xs: number[], q: number) => { const s = [...xs].sort((a, b) => a - b); return s[Math.min(s.length - 1, Math.floor(q * s.length))] ?? NaN; };

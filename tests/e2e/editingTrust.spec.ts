@@ -122,3 +122,11 @@ test('a fresh document shows no annotation error', async ({ page }) => {
   await expect(page.getByText('needs two points for a barrier arrow')).toBeVisible();
   await expect(page.locator('.notes .problem')).toHaveCount(0);
 });
+
+test('Tab from the figure reaches the first level before any connector, and each step is one stop', async ({ page }) => {
+  await page.getByRole('button', { name: 'Fit width' }).focus();
+  await page.keyboard.press('Tab');
+  await expect(page.locator(':focus')).toHaveAttribute('data-kind', 'level');
+  const stops = await page.getByRole('button', { name: /^Step AE → TS-th → LC \(Thermal\)/ }).count();
+  expect(stops).toBe(1);
+});

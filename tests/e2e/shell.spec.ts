@@ -26,7 +26,7 @@ function typedExpectations(doc: Document) {
     if (doc.settings.reference.kind !== 'first' || first?.mode !== 'value' || first.value !== 0) continue;
     for (const point of pathway.points) {
       if (point.energy.mode === 'value' && point.energy.unit === doc.settings.unit && point.energy.quantity === undefined) {
-        rows.push({ pathway: pathway.name, label: point.label, shown: point.energy.value.toFixed(doc.settings.decimals) });
+        rows.push({ pathway: pathway.name, label: point.label, shown: point.energy.value.toFixed(doc.settings.decimals).replace('-', '−') });
       }
     }
   }

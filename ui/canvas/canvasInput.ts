@@ -32,3 +32,8 @@ export function nudge(doc: Document, pathway: string, point: string, key: string
   }
   return null;
 }
+
+/** Undo group of a nudge: a run of energy nudges is one step, a run of position nudges another. */
+export function nudgeGroup(key: string, pathway: string, point: string): string {
+  return `nudge:${key === 'ArrowUp' || key === 'ArrowDown' ? 'energy' : 'position'}:${pathway}:${point}`;
+}

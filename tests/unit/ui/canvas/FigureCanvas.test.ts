@@ -25,6 +25,18 @@ describe('FigureCanvas', () => {
     expect(store.doc.pathways[0]!.points[1]!.energy).toMatchObject({ value: 20 });
   });
 
+  it('an energy nudge and a sideways nudge are separate undo steps', async () => {
+    const store = routeStore();
+    render(FigureCanvas, { store, scene: sceneOf(store) });
+    const ts = screen.getByRole('button', { name: /^TS \(transition state, Route\)/ });
+    await fireEvent.keyDown(ts, { key: 'ArrowUp' });
+    await fireEvent.keyDown(ts, { key: 'ArrowRight' });
+    expect(store.doc.pathways[0]!.points[1]!.x).toBeDefined();
+    store.undo();
+    expect(store.doc.pathways[0]!.points[1]!.x).toBeUndefined();
+    expect(store.doc.pathways[0]!.points[1]!.energy).toMatchObject({ value: 20.1 });
+  });
+
   it('says why an estimated level cannot be moved, and leaves it alone', async () => {
     const store = routeStore();
     const [a, t, b] = store.doc.pathways[0]!.points;

@@ -43,7 +43,7 @@ describe('MechanismPanel: composition and rate data', () => {
     const t1 = within(table).getByRole('textbox', { name: 'TS T, row 1' });
     await fireEvent.focus(t1);
     await fireEvent.input(t1, { target: { value: '-5' } });
-    expect(screen.getByRole('alert').textContent).toBe('temperature -5 K is outside 1 to 10000 K');
+    expect(screen.getByRole('alert').textContent).toBe('expected a positive temperature in K');
     expect(est()[0]!.temperatureK).toBe(298.15);
     expect((screen.getByRole('button', { name: 'Remove row 1 of TS Eyring plot data' }) as HTMLButtonElement).disabled).toBe(true);
     await fireEvent.click(screen.getByRole('button', { name: 'Add a (T, k) row to TS' }));

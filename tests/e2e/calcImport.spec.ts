@@ -14,7 +14,7 @@ test('dropping a Gaussian and an ORCA output shows the review, then adds both sp
   const before = await page.getByRole('tab', { name: /Species/ }).textContent();
   await page.getByRole('region', { name: 'Species' }).evaluate((el, files) => {
     const data = new DataTransfer();
-    for (const [name, text] of files) data.items.add(new File([text], name));
+    for (const [name, text] of files) data.items.add(new File([text!], name!));
     el.dispatchEvent(new DragEvent('drop', { dataTransfer: data, bubbles: true, cancelable: true }));
   }, [['dvb_g16.log', fixture('g16-dvb-freq.log')], ['dvb_orca6.out', fixture('orca6-dvb-freq.out')]]);
   const review = page.getByRole('table', { name: 'Species read from output files' });

@@ -50,6 +50,7 @@ export function readGaussianLog(text: string): CalcRecord {
   let frequencies: number[] | null = null;
   let frequencyBlocks = 0;
   let thermoT: { t: number; p: number } | null = null;
+  let thermoRoute: string | null = null;
   const corrections: Record<'zpe' | 'e' | 'h' | 'g', number | null> = { zpe: null, e: null, h: null, g: null };
   let symmetryNumber: number | null = null;
   let lastTermination: 'normal' | 'error' | null = null;
@@ -96,7 +97,7 @@ export function readGaussianLog(text: string): CalcRecord {
       }
       continue;
     }
-    if ((m = /Temperature\s+(\S+) Kelvin\.\s+Pressure\s+(\S+) Atm\./.exec(line))) { thermoT = { t: Number(m[1]), p: Number(m[2]) }; continue; }
+    if ((m = /Temperature\s+(\S+) Kelvin\.\s+Pressure\s+(\S+) Atm\./.exec(line))) { thermoT = { t: Number(m[1]), p: Number(m[2]) }; thermoRoute = route; continue; }
     if ((m = /Rotational symmetry number\s+(\d+)/.exec(line))) { symmetryNumber = Number(m[1]); continue; }
     if ((m = /Zero-point correction=\s+(\S+)/.exec(line))) { corrections.zpe = fortranNumber(m[1]); continue; }
     if ((m = /Thermal correction to (Energy|Enthalpy|Gibbs Free Energy)=\s+(\S+)/.exec(line))) {
@@ -128,6 +129,9 @@ export function readGaussianLog(text: string): CalcRecord {
   if (thermoT && corrections.g !== null) {
     thermo = { temperatureK: thermoT.t, pressureAtm: thermoT.p, zpe: corrections.zpe, eCorrection: corrections.e, hCorrection: corrections.h, gCorrection: corrections.g, entropyModel: 'harmonic' };
   } else missing.push('thermochemistry');
+  if (thermo && route && thermoRoute && levelOf(thermoRoute) !== levelOf(route)) {
+    notes.push(`the thermochemistry is from an earlier job step (${levelOf(thermoRoute)}), the energy from the last (${levelOf(route)})`);
+  }
   if (termination === 'truncated') missing.push('a termination line (the file ends early)');
   return {
     program: 'gaussian', version, method: route ? levelOf(route) : null,

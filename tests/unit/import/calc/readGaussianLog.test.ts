@@ -96,3 +96,14 @@ describe('readGaussianLog, correlated single point', () => {
     expect(r.termination).toBe('truncated');
   });
 });
+
+describe('readGaussianLog, frequency step followed by a single point', () => {
+  it('keeps the last energy and says the thermochemistry came from the earlier step', () => {
+    // The real frequency job followed by the real CCSD(T) step (both cclib fixtures, different molecules:
+    // only the reading of job steps is tested), joined as Link1 steps.
+    const r = readGaussianLog(`${LOG} Link1:  Proceeding to internal job step number  2.\n${qcFixture('g16-water-ccsdt.log')}`);
+    expect(r.energyLabel).toBe('CCSD(T)');
+    expect(r.method).toBe('CCSD(T)/STO-3G');
+    expect(r.notes).toContain('the thermochemistry is from an earlier job step (b3lyp/sto-3g), the energy from the last (CCSD(T)/STO-3G)');
+  });
+});

@@ -17,7 +17,8 @@ function sheet() {
 
 const drop = (files: File[]) => fireEvent.drop(screen.getByRole('region', { name: 'Species' }), { dataTransfer: { files } });
 
-describe('reading output files on the species sheet', () => {
+// The first render pays the component compile and warm-up; on a loaded machine that exceeds 5 s.
+describe('reading output files on the species sheet', { timeout: 30_000 }, () => {
   it('shows a review table first and adds the species (and a pathway) only on "Add"', async () => {
     const store = sheet();
     await drop([new File([FREQ], 'int1_freq.log'), new File([FREQ.replace('-382.308266602', '-382.300000000')], 'ts1.log')]);

@@ -36,7 +36,7 @@ test('sampling runs off the page: no long task while the worker samples', async 
   const panel = page.getByRole('region', { name: /How sure is this/ });
   await expect(panel.getByRole('status')).toContainText('Sampling', { timeout: 20_000 });
   // The run is in a dedicated worker, not in slices on the page.
-  expect(page.workers().map((w) => w.url())).toEqual([expect.stringMatching(/uncertaintyWorker/)]);
+  await expect.poll(() => page.workers().map((w) => w.url()).join(' ')).toMatch(/uncertaintyWorker/);
   await page.evaluate(() => { (window as unknown as { longTasks: number[] }).longTasks = []; });
   await page.waitForTimeout(1500);
   await expect(panel.getByRole('status')).toContainText('Sampling');
@@ -45,13 +45,32 @@ test('sampling runs off the page: no long task while the worker samples', async 
   expect(long.filter((d) => d > 250)).toEqual([]);
 });
 
-test('looks right at 1280 × 800', async ({ page }) => {
+test('error bars on the canvas follow the chosen kind and go away while a new run is pending', async ({ page }) => {
   await openEditor(page);
-  await page.setViewportSize({ width: 1280, height: 800 });
   demo.settings.uncertainty = { samples: 2000, seed: 4, defaultSigma: 1.5 };
   await dropFile(page, JSON.stringify(demo), 'demo.passline');
   const panel = page.getByRole('region', { name: /How sure is this/ });
   await expect(panel.getByRole('status')).toContainText('N = 2000 samples', { timeout: 20_000 });
+  const bars = page.locator('[data-role="errorBar"]');
+  await expect(bars).toHaveCount(0);
+  await panel.getByRole('combobox', { name: 'Error bars on the figure' }).selectOption('interval');
+  // Every level whose energy varies: all but the two reference states (AE, LA + AE) and LA·AE of the cycle.
+  await expect(bars).not.toHaveCount(0);
+  const count = await bars.count();
+  await expect(panel.getByRole('status')).toContainText('N = 2000 samples');
+  await panel.getByRole('combobox', { name: 'Error bars on the figure' }).selectOption('sigma');
+  await expect(bars).toHaveCount(count);
+});
+
+test('looks right at 1280 × 800', async ({ page }) => {
+  await openEditor(page);
+  await page.setViewportSize({ width: 1280, height: 800 });
+  demo.settings.uncertainty = { samples: 2000, seed: 4, defaultSigma: 1.5 };
+  demo.figure.errorBars = 'interval';
+  await dropFile(page, JSON.stringify(demo), 'demo.passline');
+  const panel = page.getByRole('region', { name: /How sure is this/ });
+  await expect(panel.getByRole('status')).toContainText('N = 2000 samples', { timeout: 20_000 });
+  await page.screenshot({ path: 'test-results/uncertainty-canvas.png' });
   await panel.scrollIntoViewIfNeeded();
   await page.screenshot({ path: 'test-results/uncertainty-panel.png' });
 });

@@ -3,6 +3,7 @@ import type { DocumentAnalysis } from '../../core/analysis/analyseDocument.ts';
 import type { PointDrawing } from '../../core/structure/pointDepictions.ts';
 import type { FontMetrics } from '../../core/figure/font/fontMetrics.ts';
 import { layoutFigure } from '../../core/figure/layoutFigure.ts';
+import { addErrorBars, type ErrorBarRanges } from '../../core/figure/errorBars.ts';
 import type { Preset } from '../../core/figure/presets.ts';
 import type { ThemeName } from '../../core/figure/themes.ts';
 import { sceneToSvg } from '../../core/export/sceneToSvg.ts';
@@ -19,7 +20,7 @@ import { svgToPng } from './svgToPng.ts';
 export type ExportKind = 'svg' | 'pdf' | 'png' | 'report' | 'points-csv' | 'points-md' | 'analysis-csv' | 'analysis-md';
 
 /** Export choices: figure size preset, theme and PNG resolution. */
-export interface ExportChoice { kind: ExportKind; preset: Preset; theme: ThemeName; dpi: number }
+export interface ExportChoice { kind: ExportKind; preset: Preset; theme: ThemeName; dpi: number; /** Error bars on the levels (issue 18). */ errorBars?: ErrorBarRanges | undefined }
 
 /** The file to hand to the host, and a preview: SVG text for figures, the text itself for tables. */
 export interface ExportFile { data: string | Uint8Array; mimeType: ExportMimeType; extension: string; preview: { svg?: string; text?: string } }
@@ -29,7 +30,10 @@ export interface ExportFont { metrics: FontMetrics; bytes: Uint8Array }
 
 /** Lays the figure out with the chosen preset and theme (the same scene the canvas draws) and writes the chosen format. */
 export async function buildExport(doc: Document, analysis: DocumentAnalysis, font: ExportFont, choice: ExportChoice, render = true, structures?: ReadonlyMap<string, PointDrawing>): Promise<ExportFile> {
-  const figure = () => layoutFigure(analysis.profile, doc, { metrics: font.metrics, preset: choice.preset, theme: choice.theme, ...(structures ? { structures } : {}) });
+  const figure = () => {
+    const scene = layoutFigure(analysis.profile, doc, { metrics: font.metrics, preset: choice.preset, theme: choice.theme, ...(structures ? { structures } : {}) });
+    return choice.errorBars ? addErrorBars(scene, analysis.profile, choice.errorBars) : scene;
+  };
   const tables = () => analysisTables(analysisReport(doc, analysis), doc.settings.decimals);
   switch (choice.kind) {
     case 'svg': { const svg = sceneToSvg(figure()); return { data: svg, mimeType: 'image/svg+xml', extension: '.svg', preview: { svg } }; }

@@ -1,7 +1,13 @@
+import { untrack } from 'svelte';
 import type { Document } from '../../core/model/schema.ts';
 import { uncertainInputs } from '../../core/uncertainty/uncertainInputs.ts';
 import { DEFAULT_SAMPLES, DEFAULT_SEED, type UncertaintyResult } from '../../core/uncertainty/uncertaintyRun.ts';
 import { runJob, type UncertaintyJob, type UncertaintyMessage } from './uncertaintyJob.ts';
+
+/** Figure-only edits keep the inputs' identity (edits share what they do not change): no new run. */
+function sameInputs(a: Document, b: Document): boolean {
+  return a.pathways === b.pathways && a.species === b.species && a.settings === b.settings && a.comparisons === b.comparisons;
+}
 
 export type RunnerStatus = 'no-inputs' | 'waiting' | 'running' | 'done' | 'error';
 
@@ -30,8 +36,13 @@ export class UncertaintyRunner {
 
   /** Asks for a result for `doc`; the run starts once no newer document arrives for `settleMs`. */
   schedule(doc: Document): void {
+    // Untracked: an effect that schedules must depend on the document only, not on this run's state.
+    untrack(() => this.#schedule(doc));
+  }
+
+  #schedule(doc: Document): void {
     clearTimeout(this.#timer);
-    if (doc === this.resultDoc && this.status === 'done') return;
+    if (this.status === 'done' && this.resultDoc && sameInputs(doc, this.resultDoc)) { this.resultDoc = doc; return; }
     if (uncertainInputs(doc).length === 0) {
       this.#cancel();
       this.status = 'no-inputs';

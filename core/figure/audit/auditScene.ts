@@ -45,16 +45,21 @@ export function auditScene(scene: Scene, options: AuditOptions = {}): FigureAudi
   const clear = options.clearanceMm ?? 0.1;
   const p = scenePrimitives(scene);
   const name = (i: number) => describe(scene, i);
+  // A molecule drawing is one group: its own bonds end at its own atom labels by design, so
+  // strokes and texts of one group are not judged against each other (the group as a whole is).
+  const groupOf = (i: number) => scene.items[i]?.group;
+  const sameGroup = (a: number, b: number) => groupOf(a) !== undefined && groupOf(a) === groupOf(b);
   const audit: FigureAudit = { crossings: [], overlaps: [], misread: [], offPage: [], legendOverContent: [] };
 
   for (const t of p.texts) {
     for (const s of p.strokes) {
       if (s.role === 'leader' && t.owners.includes(`${s.pathway ?? ''}/${s.point ?? ''}`)) continue;
+      if (sameGroup(s.item, t.item)) continue;
       if (segmentHitsBox(s.x0, s.y0, s.x1, s.y1, grow(t.box, s.half + clear))) {
         audit.crossings.push({ items: [s.item, t.item], detail: `${s.role} through ${name(t.item)}` });
       }
     }
-    for (const a of p.areas) if (intersects(a.box, grow(t.box, clear))) audit.crossings.push({ items: [a.item, t.item], detail: `${a.role} shape over ${name(t.item)}` });
+    for (const a of p.areas) if (!sameGroup(a.item, t.item) && intersects(a.box, grow(t.box, clear))) audit.crossings.push({ items: [a.item, t.item], detail: `${a.role} shape over ${name(t.item)}` });
     const b = t.box;
     if (b.x < margin - EPS || b.y < margin - EPS || b.x + b.w > scene.widthMm - margin + EPS || b.y + b.h > scene.heightMm - margin + EPS) {
       audit.offPage.push({ items: [t.item], detail: `${name(t.item)} within ${margin} mm of the page edge` });
@@ -63,6 +68,7 @@ export function auditScene(scene: Scene, options: AuditOptions = {}): FigureAudi
   p.texts.forEach((a, i) => {
     for (const b of p.texts.slice(i + 1)) {
       if (a.block !== null && a.block === b.block) continue;
+      if (sameGroup(a.item, b.item)) continue;
       if (intersects(grow(a.box, clear / 2), grow(b.box, clear / 2))) audit.overlaps.push({ items: [a.item, b.item], detail: `${name(a.item)} overlaps ${name(b.item)}` });
     }
   });

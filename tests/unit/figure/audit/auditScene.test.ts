@@ -35,6 +35,14 @@ describe('auditScene', () => {
     expect(auditCounts(auditScene(scene([drawing, text(45, 25, 8, 4)]))).crossings).toBe(1);
   });
 
+  it('judges a molecule drawing (one group) against the rest, not its bonds against its own atom labels', () => {
+    const atom = text(40, 20, 4, 4, { role: 'structure', group: 'structure-a-p' });
+    const ownBond = line(30, 22, 41, 22, { role: 'structure', group: 'structure-a-p' });
+    expect(auditCounts(auditScene(scene([atom, ownBond]))).crossings).toBe(0);
+    expect(auditCounts(auditScene(scene([atom, line(30, 22, 60, 22)]))).crossings).toBe(1);
+    expect(auditCounts(auditScene(scene([atom, line(30, 22, 41, 22, { role: 'structure', group: 'structure-a-q' })]))).crossings).toBe(1);
+  });
+
   it('counts overlapping text, but not the lines of one label block', () => {
     expect(auditCounts(auditScene(scene([text(40, 20, 10, 4, { role: 'tick' }), text(45, 22, 10, 4, { role: 'tick' })]))).overlaps).toBe(1);
     expect(auditCounts(auditScene(scene([text(40, 20, 10, 4, ids('a', 'p')), text(40, 24, 10, 4, ids('a', 'p'))]))).overlaps).toBe(0);

@@ -37,14 +37,14 @@ describe('importTable', () => {
   });
 
   it('makes absolute hartree energies relative to one document-wide zero: the table\'s first row', () => {
-    const doc = imported('pathway,label,kind,E [hartree]\nA,R,min,-500.250000\nA,T,ts,-500.218125\nB,S,min,-100.0\nB,P,min,-100.01\n');
+    const doc = imported('pathway,label,kind,E [hartree]\nA,R,min,-500.250000\nA,T,ts,-500.218125\nB,S,min,-500.300000\nB,P,min,-500.310000\n');
     const [a, b] = doc.pathways;
     const ts = a!.points[1]!.energy as { value: number; unit: string };
     expect(ts.unit).toBe('hartree');
     // 0.031875 E_h = 20.0021 kcal/mol with CODATA 2018 (627.5094740630558 kcal/mol per E_h, REFERENCE.md §1)
     expect(convertEnergy(ts.value, 'hartree', 'kcal/mol')).toBeCloseTo(0.031875 * 627.5094740630558, 6);
-    // Old behaviour re-zeroed B to its own first row (0); on the common zero it is −100.0 − (−500.25) E_h.
-    expect((b!.points[0]!.energy as { value: number }).value).toBeCloseTo(400.25, 9);
+    // Old behaviour re-zeroed B to its own first row (0); on the common zero it is −500.30 − (−500.25) E_h.
+    expect((b!.points[0]!.energy as { value: number }).value).toBeCloseTo(-0.05, 9);
     expect(doc.settings.unit).toBe('kcal/mol');
     expect(doc.settings.reference).toEqual({ kind: 'zero' });
   });

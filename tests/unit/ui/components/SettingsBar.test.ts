@@ -20,7 +20,7 @@ describe('SettingsBar', () => {
     const field = screen.getByRole('textbox', { name: 'Temperature' });
     await fireEvent.focus(field);
     await fireEvent.input(field, { target: { value: '0' } });
-    expect(screen.getByRole('alert').textContent).toBe('expected a positive number in K');
+    expect(screen.getByRole('alert').textContent).toBe('temperature 0 K is outside 1 to 10000 K');
     expect(onchange).not.toHaveBeenCalled();
     await fireEvent.input(field, { target: { value: '310' } });
     expect(onchange).toHaveBeenLastCalledWith({ temperatureK: 310 }, 'temperature');

@@ -87,7 +87,7 @@ test('a malformed file shows its errors and leaves the demo in place', async ({ 
   await expect(alert).toContainText('expected a number in kcal/mol, got "abc"');
   await expect(page.getByRole('heading', { level: 1 })).toHaveText(doc.title);
   await expect(page.getByRole('table', { name: doc.pathways[0]!.name, exact: true })).toBeVisible();
-  await expect(page.getByRole('status')).toContainText('broken.passline was not opened');
+  await expect(page.getByRole('status', { name: 'Document status' })).toContainText('broken.passline was not opened');
 });
 
 test('save as downloads text that loads as the same document', async ({ page }) => {
@@ -97,7 +97,7 @@ test('save as downloads text that loads as the same document', async ({ page }) 
   expect(file.suggestedFilename()).toBe('demo.passline');
   const saved = parseDocument(readFileSync(await file.path(), 'utf8'));
   expect(saved.ok && saved.doc).toEqual(demoDocument());
-  await expect(page.getByRole('status')).toHaveText('Saved demo.passline.');
+  await expect(page.getByRole('status', { name: 'Document status' })).toHaveText('Saved demo.passline.');
 });
 
 test('a valid file opened replaces the document', async ({ page }) => {
@@ -108,7 +108,8 @@ test('a valid file opened replaces the document', async ({ page }) => {
   await (await chooser).setFiles({ name: 'second.passline', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(other)) });
   await expect(page.getByRole('heading', { level: 1 })).toHaveText('Second scenario (invented)');
   await expect(page.getByRole('table', { name: 'Renamed route', exact: true })).toBeVisible();
-  await expect(page.getByRole('status')).toHaveText('Opened second.passline.');
+  await expect(page.getByRole('status', { name: 'Document status' })).toHaveText('Opened second.passline (updated from format version 2; saving writes the new version).');
+  // (the demo is a format-2 file: opening it says it was migrated)
 });
 
 test('the built page carries the strict Content-Security-Policy', async ({ page }) => {

@@ -8,6 +8,7 @@ import { energeticSpan, type EnergeticSpan } from '../kinetics/energeticSpan.ts'
 import { compareBarriers, competingPathways, type BarrierComparison, type CompetingPathways } from '../kinetics/compare.ts';
 import { molecularityFromCompositions } from './molecularity.ts';
 import { formatScientific } from '../format/formatScientific.ts';
+import { rateStandardStateShort } from './rateStandardState.ts';
 import type { StructureTable } from '../structure/readStructures.ts';
 import { structureFindings } from '../structure/structureFindings.ts';
 import { withStructureFormulas } from '../structure/withStructureFormulas.ts';
@@ -57,15 +58,19 @@ function compare(c: Comparison, profile: ResolvedProfile, findings: Finding[]): 
   return { type: 'selectivity', pathways: c.pathways, enantiomeric: c.enantiomeric, result };
 }
 
-/** Bimolecular rate constants above ~10¹⁰ L mol⁻¹ s⁻¹ exceed diffusion control in common solvents (common practice, REFERENCE.md §10). */
+/**
+ * Bimolecular rate constants above ~10¹⁰ L mol⁻¹ s⁻¹ exceed diffusion control in common
+ * solvents (common practice, REFERENCE.md §10). Encounter control is a two-body idea, so only
+ * bimolecular steps are checked; a termolecular k (M⁻² s⁻¹) has no comparable limit.
+ */
 const DIFFUSION_LIMIT = 1e10;
 
-function fasterThanDiffusion({ pathway, steps }: PathwayAnalysis): Finding[] {
+function fasterThanDiffusion({ pathway, steps }: PathwayAnalysis, standardState: string): Finding[] {
   const out: Finding[] = [];
   for (const s of steps) {
-    for (const [k, m, dir] of [[s.kForward, s.molecularityForward, 'forward'], [s.kReverse, s.molecularityReverse, 'reverse']] as const) {
-      if (k !== null && m >= 2 && k > DIFFUSION_LIMIT) {
-        out.push({ severity: 'info', code: 'faster-than-diffusion', pathway: pathway.id, point: (s.ts ?? s.to).id, message: `the ${dir} rate constant of ${s.from.label} → ${s.to.label} is ${formatScientific(k)} M⁻¹ s⁻¹, above the diffusion limit (~10¹⁰ M⁻¹ s⁻¹, common practice); the step is diffusion-controlled in practice` });
+    for (const [k, m, unit, dir] of [[s.kForward, s.molecularityForward, s.unitForward, 'forward'], [s.kReverse, s.molecularityReverse, s.unitReverse, 'reverse']] as const) {
+      if (k !== null && m === 2 && k > DIFFUSION_LIMIT) {
+        out.push({ severity: 'info', code: 'faster-than-diffusion', pathway: pathway.id, point: (s.ts ?? s.to).id, message: `the ${dir} rate constant of ${s.from.label} → ${s.to.label} is ${formatScientific(k)} ${unit} (${standardState}), above the diffusion limit (~10¹⁰ M⁻¹ s⁻¹ at c° = 1 mol/L, common practice); the step is diffusion-controlled in practice` });
       }
     }
   }
@@ -106,7 +111,8 @@ export function analyseResolved(doc: Document, profile: ResolvedProfile): Docume
       energeticSpan: span.span,
     };
   });
-  for (const p of pathways) extra.push(...fasterThanDiffusion(p));
+  const standardState = rateStandardStateShort(doc);
+  for (const p of pathways) extra.push(...fasterThanDiffusion(p, standardState));
   if (profile.quantity !== 'G') {
     extra.push({ severity: 'warning', code: 'rates-need-g', message: `rate constants, half-lives and TOFs follow from Gibbs energies; this profile is in ${profile.quantity}, so they treat Δ‡${profile.quantity} as if it were Δ‡G` });
   }

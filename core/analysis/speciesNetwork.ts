@@ -20,6 +20,18 @@ function minus(a: Counts, b: Counts): Counts {
   return out;
 }
 
+/**
+ * Overall roles of the network's species, read from the first and last minimum of each
+ * pathway: what is consumed overall (substrates, with stoichiometry), what is formed overall
+ * (products), and what is there in equal amount at both ends and takes part in a step (the
+ * catalyst the cycle regenerates). Pathways are merged; the first pathway's stoichiometry wins.
+ */
+export interface SpeciesRoles {
+  substrates: Counts;
+  products: Counts;
+  catalyst: string[];
+}
+
 const key = (c: Counts) => Object.entries(c).sort(([x], [y]) => (x < y ? -1 : 1)).map(([s, n]) => `${n}${s}`).join('+');
 
 /**
@@ -29,8 +41,9 @@ const key = (c: Counts) => Object.entries(c).sort(([x], [y]) => (x < y ? -1 : 1)
  * by detailed balance. The same reaction met in two pathways is kept once. Pathways without
  * compositions are left out, with a finding.
  */
-export function speciesNetwork(doc: Document, analysis: DocumentAnalysis): { network: MassActionNetwork | null; findings: Finding[] } {
+export function speciesNetwork(doc: Document, analysis: DocumentAnalysis): { network: MassActionNetwork | null; roles: SpeciesRoles | null; findings: Finding[] } {
   const findings: Finding[] = [];
+  const ends: [Counts, Counts][] = [];
   const reactions: ReactionInput[] = [];
   const seen = new Set<string>();
   analysis.pathways.forEach(({ steps }, i) => {
@@ -40,6 +53,8 @@ export function speciesNetwork(doc: Document, analysis: DocumentAnalysis): { net
       findings.push({ severity: 'info', code: 'network-needs-compositions', pathway: pathway.id, message: `"${pathway.name}" is left out of the species network: not every minimum has a composition` });
       return;
     }
+    const minima = pathway.points.filter((p) => p.kind === 'min');
+    if (minima.length >= 2) ends.push([counts(byId.get(minima[0]!.id)!), counts(byId.get(minima.at(-1)!.id)!)]);
     for (const step of steps) {
       const a = counts(byId.get(step.from.id)!), b = counts(byId.get(step.to.id)!);
       const reactants = minus(a, b), products = minus(b, a);
@@ -49,9 +64,22 @@ export function speciesNetwork(doc: Document, analysis: DocumentAnalysis): { net
       reactions.push({ label: `${step.from.label} → ${step.to.label}`, reactants, products, kf: step.kForward, kr: step.kReverse ?? 0 });
     }
   });
-  if (reactions.length === 0) return { network: null, findings: [...findings, { severity: 'error', code: 'network-empty', message: 'no step with known compositions and energies to build a species network from' }] };
+  if (reactions.length === 0) return { network: null, roles: null, findings: [...findings, { severity: 'error', code: 'network-empty', message: 'no step with known compositions and energies to build a species network from' }] };
   const built = networkFromReactions(reactions);
-  if (!built.ok) return { network: null, findings: [...findings, ...built.errors.map((e) => ({ severity: 'error' as const, code: 'network-invalid', message: `${e.path}: ${e.message}` }))] };
+  if (!built.ok) return { network: null, roles: null, findings: [...findings, ...built.errors.map((e) => ({ severity: 'error' as const, code: 'network-invalid', message: `${e.path}: ${e.message}` }))] };
   const labelOf = new Map(doc.species.map((s) => [s.id, s.label]));
-  return { network: { ...built.network, labels: built.network.species.map((s) => labelOf.get(s) ?? s) }, findings };
+  const network = { ...built.network, labels: built.network.species.map((s) => labelOf.get(s) ?? s) };
+  return { network, roles: speciesRoles(ends, new Set(network.species)), findings };
+}
+
+function speciesRoles(ends: readonly [Counts, Counts][], inNetwork: ReadonlySet<string>): SpeciesRoles | null {
+  const substrates: Counts = {}, products: Counts = {}, catalyst = new Set<string>();
+  const add = (into: Counts, c: Counts) => { for (const [s, n] of Object.entries(c)) if (inNetwork.has(s) && !(s in into)) into[s] = n; };
+  for (const [first, last] of ends) {
+    add(substrates, minus(first, last));
+    add(products, minus(last, first));
+    for (const [s, n] of Object.entries(first)) if (last[s] === n && inNetwork.has(s)) catalyst.add(s);
+  }
+  if (Object.keys(substrates).length === 0 || Object.keys(products).length === 0) return null;
+  return { substrates, products, catalyst: [...catalyst] };
 }

@@ -31,7 +31,9 @@ export const COMMAND_HELP: Record<string, string> = {
       (mol/L) vs time (s) and, for a cycle at steady state, the simulated TOF.
       Defaults: 3600 s, 50 log-spaced times, the first minimum at 1 mol/L.
       --species: simulate the document's species instead (states need compositions;
-      A + B ⇌ C steps are second order), starting from --init SPECIES=CONC.
+      A + B ⇌ C steps are second order), starting from --init SPECIES=CONC; adds
+      conversion of each substrate, yield of each product and TON (product per
+      catalyst), read from what the first and last states consume, form and regenerate.
 `,
   render: `  passline render FILE -o OUT.svg|OUT.pdf|OUT.png [--width-mm W] [--preset single|double|slide]
                  [--theme colour|greyscale|dark] [--dpi N] [--unit U] [--temperature K] [--strict] [--watch]

@@ -1,6 +1,7 @@
 import { resolveProfile } from '../profile/resolve.ts';
 import { analyseDocument } from '../analysis/analyseDocument.ts';
-import { speciesNetwork } from '../analysis/speciesNetwork.ts';
+import { speciesNetwork, type SpeciesRoles } from '../analysis/speciesNetwork.ts';
+import { speciesProgress } from '../analysis/speciesProgress.ts';
 import type { MassActionNetwork } from '../kinetics/microkinetics/network.ts';
 import type { Finding, ResolvedPathway } from '../profile/types.ts';
 import type { Document } from '../model/schema.ts';
@@ -48,7 +49,7 @@ export function runSimulate(file: string, options: SimulateCliOptions, io: CliIo
   const until = boundedOption('until', options.until, 'timeSeconds', 3600);
   const points = boundedOption('points', options.points, 'simulationPoints', 50, true);
   const chosen = options.species ? fromSpecies(doc) : fromPathway(doc, options.pathway);
-  const { network, findings, pathway } = chosen;
+  const { network, findings, pathway, roles } = chosen;
   const states = outsideHard('simulationStates', network.species.length);
   if (states) throw new CliError(`${states}: simulate a shorter pathway or fewer species (the stiff solver's work grows quickly with the number of states)`);
   const what = pathway ? `a minimum of "${pathway.name}"` : 'a species of the document';
@@ -67,9 +68,12 @@ export function runSimulate(file: string, options: SimulateCliOptions, io: CliIo
   const outcome = simulate(network, initial, { until, points, maxSteps: 100_000 + 4 * points });
   if (!outcome.ok) throw new CliError(outcome.errors.map((e) => `${e.path}: ${e.message}`).join('; '));
   const s = outcome.simulation;
+  // Species mode reads progress from the overall roles; a pathway chain, from its first minimum.
+  const progress = roles ? speciesProgress(s, roles) : [];
+  const extra = progress.length > 0 ? progress : [{ name: options.species ? `conversion of ${s.labels[s.species.indexOf(s.reference)]}` : 'conversion', values: s.conversion }];
   io.out(tableToCsv({
-    columns: ['time [s]', ...s.labels.map((l) => `${l} [mol/L]`), 'conversion'],
-    rows: s.times.map((t, k) => [t, ...s.concentrations[k]!, s.conversion[k]!].map(significant)),
+    columns: ['time [s]', ...s.labels.map((l) => `${l} [mol/L]`), ...extra.map((e) => e.name)],
+    rows: s.times.map((t, k) => [t, ...s.concentrations[k]!, ...extra.map((e) => e.values[k]!)].map(significant)),
   }));
   for (const f of [...findings, ...s.findings]) io.err(`${f.severity}: ${f.message}\n`);
   if (s.steadyStateTof !== undefined) io.err(`steady-state TOF (simulated): ${s.steadyStateTof.toPrecision(6)} s⁻¹\n`);
@@ -79,13 +83,13 @@ export function runSimulate(file: string, options: SimulateCliOptions, io: CliIo
   }
 }
 
-interface ChosenNetwork { network: MassActionNetwork; findings: Finding[]; pathway: ResolvedPathway | null }
+interface ChosenNetwork { network: MassActionNetwork; findings: Finding[]; pathway: ResolvedPathway | null; roles: SpeciesRoles | null }
 
 /** The document's species as a mass-action network (states need compositions). */
 function fromSpecies(doc: Document): ChosenNetwork {
   const built = speciesNetwork(doc, analyseDocument(doc));
   if (!built.network) throw new CliError(built.findings.map((f) => f.message).join('; '));
-  return { network: built.network, findings: built.findings, pathway: null };
+  return { network: built.network, findings: built.findings, pathway: null, roles: built.roles };
 }
 
 /** One pathway as a first-order chain of its minima. */
@@ -97,5 +101,5 @@ function fromPathway(doc: Document, name: string | undefined): ChosenNetwork {
   if (!pathway) throw new CliError(name === undefined ? 'the document has no pathways' : `--pathway: no pathway "${name}" (have ${profile.pathways.map((p) => `"${p.name}"`).join(', ')})`, name === undefined ? 1 : EXIT_USAGE);
   const built = networkFromPathway(pathway, { temperatureK: doc.settings.temperatureK, transmission: doc.settings.transmission });
   if (!built.ok) throw new CliError(built.errors.map((e) => e.message).join('; '));
-  return { network: built.network, findings: built.findings, pathway };
+  return { network: built.network, findings: built.findings, pathway, roles: null };
 }

@@ -3,6 +3,7 @@ import type { Document, Quantity, Unit } from '../model/schema.ts';
 import type { Finding, Provenance } from '../profile/types.ts';
 import type { PointRef } from '../kinetics/types.ts';
 import { fromJoulesPerMol } from '../units/energy.ts';
+import { rateStandardState } from '../analysis/rateStandardState.ts';
 
 /** A point as printed by `analyze --json`: energy in the display unit. */
 export interface ReportPoint { label: string; kind: 'min' | 'ts'; energy: number | null; provenance: Provenance }
@@ -70,16 +71,7 @@ function controlKey(ref: PointRef, taken: Record<string, number>): string {
 /** Pseudo-first-order wording for half-lives of effective barriers and bimolecular steps. */
 export const HALF_LIFE_ORDER = 'first order, or pseudo-first order with partners at 1 mol/L';
 
-/** The standard state k and K refer to, from the document's settings. */
-export function rateStandardState(doc: Document): string {
-  const st = doc.settings.standardState;
-  if (st !== 'as-computed') return `c° = 1 mol/L (energies corrected from ${st === '1atm-to-1M' ? '1 atm' : '1 bar'} per species); K and k of steps that change the number of species are in (mol/L) units`;
-  const formation = doc.pathways.some((p) => p.points.some((q) => q.energy.mode === 'formation'));
-  const gas = doc.species.some((s) => s.phase === 'gas');
-  if (formation) return 'p° = 1 bar (standard formation data): K is a pressure-based constant and the (mol/L)-unit k of molecular steps holds only after conversion to c° = 1 mol/L';
-  if (gas) return 'as computed (gas-phase energies, usually 1 atm or 1 bar): the (mol/L)-unit k of molecular steps holds only after conversion to c° = 1 mol/L; choose a 1 mol/L standard state in the settings';
-  return 'as given: the standard state of the input energies; (mol/L)-unit k of molecular steps assume it is c° = 1 mol/L';
-}
+export { rateStandardState } from '../analysis/rateStandardState.ts';
 
 /** Builds the analysis report, energies in the document's display unit, rates in SI. */
 export function analysisReport(doc: Document, analysis: DocumentAnalysis): AnalysisReport {

@@ -93,7 +93,7 @@ describe('analyseDocument', () => {
     const analysis = analyseDocument(parsed.doc);
     expect(analysis.findings.map((f) => f.code)).toEqual(['faster-than-diffusion', 'faster-than-diffusion']);
     // Printed the way the app prints numbers: "1.51 × 10¹² M⁻¹ s⁻¹", not "1.51e+12".
-    expect(analysis.findings[0]!.message).toMatch(/ is \d\.\d\d × 10[¹²³⁴⁵⁶⁷⁸⁹⁰]+ M⁻¹ s⁻¹, above the diffusion limit/);
+    expect(analysis.findings[0]!.message).toMatch(/ is \d\.\d\d × 10[¹²³⁴⁵⁶⁷⁸⁹⁰]+ M⁻¹ s⁻¹ \(c° = 1 mol\/L\), above the diffusion limit/);
     const [bind] = analysis.pathways[0]!.steps;
     expect(bind).toMatchObject({ barrierless: true, molecularityForward: 2, unitForward: 'M⁻¹ s⁻¹' });
   });
@@ -121,5 +121,29 @@ describe('analyze wording (issue 12)', () => {
     expect(text).toContain('k uses +12.2: TS raised');
     expect(text).toContain('rates below are estimates');
     expect(text).not.toContain('ΔG‡ +');
+  });
+});
+
+describe('faster-than-diffusion finding', () => {
+  const comp = (...ids: string[]) => ({ composition: ids.map((s) => ({ species: s, count: 1 })) });
+  const declared = ['A', 'B', 'C', 'TS', 'P'].map((id) => ({ id, label: id }));
+  // Eyring at Δ‡G = 2.0 kcal/mol, 298.15 K, CODATA 2018 k_B, h, R: (k_BT/h)·exp(−8368/RT) = 2.1246 × 10¹¹ L mol⁻¹ s⁻¹ (worked by hand).
+  const doc = (reactants: string[], standardState: 'as-computed' | '1atm-to-1M') => onePathway([
+    typed('R', 'min', 0, comp(...reactants)), typed('TS', 'ts', 2, comp('TS')), typed('P', 'min', -30, comp('P')),
+  ], { species: declared, settings: { standardState } });
+
+  it('quotes a bimolecular k in M⁻¹ s⁻¹ with its standard state', () => {
+    const [f, ...rest] = analyseDocument(doc(['A', 'B'], '1atm-to-1M')).findings.filter((x) => x.code === 'faster-than-diffusion');
+    expect(rest).toEqual([]);
+    expect(f!.message).toContain('is 2.12 × 10¹¹ M⁻¹ s⁻¹ (c° = 1 mol/L), above the diffusion limit');
+    const asComputed = analyseDocument(doc(['A', 'B'], 'as-computed')).findings.find((x) => x.code === 'faster-than-diffusion');
+    expect(asComputed!.message).toContain('M⁻¹ s⁻¹ (standard state of the input energies, taken as c° = 1 mol/L)');
+  });
+
+  it('does not apply the bimolecular diffusion limit to a termolecular step (common practice: encounter control is two-body)', () => {
+    const analysis = analyseDocument(doc(['A', 'B', 'C'], '1atm-to-1M'));
+    expect(analysis.pathways[0]!.steps[0]).toMatchObject({ molecularityForward: 3, unitForward: 'M⁻² s⁻¹' });
+    expect(analysis.pathways[0]!.steps[0]!.kForward!).toBeGreaterThan(1e10);
+    expect(analysis.findings.map((x) => x.code)).not.toContain('faster-than-diffusion');
   });
 });

@@ -169,6 +169,21 @@ describe('passline simulate', () => {
     expect(Math.abs(tof / 1.66434592407551e-4 - 1)).toBeLessThan(1e-4);
   });
 
+  it('--species reports substrate conversion, product yield and TON instead of the catalyst\'s conversion', async () => {
+    const pt = (id: string, kind: string, value: number, comp: string[]) => ({ id, label: id, kind, energy: { mode: 'value', value, unit: 'kcal/mol' }, composition: comp.map((species) => ({ species, count: 1 })) });
+    const doc = JSON.stringify({
+      format: 'passline', version: 2,
+      species: ['cat', 'S', 'catS', 'TS1', 'TS2', 'P'].map((id) => ({ id, label: id })),
+      pathways: [{ id: 'c', name: 'Cycle', cycle: true, points: [pt('cat + S', 'min', 0, ['cat', 'S']), pt('TS1', 'ts', 10, ['TS1']), pt('cat·S', 'min', -2, ['catS']), pt('TS2', 'ts', 15, ['TS2']), pt('cat + P', 'min', -20, ['cat', 'P'])] }],
+    });
+    const { code, out } = await run(['simulate', 'c.passline', '--species', '--init', 'cat=0.01', '--init', 'S=1', '--until', '1e4', '--points', '10'], { 'c.passline': doc });
+    expect(code).toBe(0);
+    const rows = out.trim().split(/\r?\n/);
+    expect(rows[0]).toMatch(/,conversion of S,yield of P,TON of P$/);
+    // By hand: all of 1 mol/L S over 0.01 mol/L catalyst is 100 turnovers.
+    expect(Number(rows.at(-1)!.split(',').at(-1))).toBeCloseTo(100, 3);
+  });
+
   it('names a bad --init and an unknown pathway', async () => {
     expect((await run(['simulate', 'a.passline', '--init', 'I9=1'], { 'a.passline': cycleA })).err).toContain('"I9" is not a minimum of "Cycle A"');
     expect((await run(['simulate', 'a.passline', '--init', 'I1=-1'], { 'a.passline': cycleA })).code).toBe(2);

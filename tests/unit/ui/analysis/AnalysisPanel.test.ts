@@ -19,4 +19,9 @@ describe('AnalysisPanel', () => {
     const summary = screen.getByLabelText('Summary of Route');
     expect(summary.textContent).toContain('20.0 kcal mol⁻¹ (TS over A)');
   });
+
+  it('says what the energies are measured from (the document-wide zero by default)', () => {
+    render(AnalysisPanel, { store: routeStore() });
+    expect(screen.getByLabelText('Reference').textContent).toMatch(/^Energies measured from: one document-wide zero/);
+  });
 });

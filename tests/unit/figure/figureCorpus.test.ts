@@ -24,6 +24,13 @@ describe('the figure corpus (issue 11)', () => {
     expect(stacks.size).toBe(2);
   });
 
+  it('leaves the plot room for a four-line stack of close transition states at 85 mm instead of leaving its labels out (follow-up: all four were left out)', () => {
+    const e = FIGURE_CORPUS.find((c) => c.name === '4 pathways × 3 points, shared slots within 3 kcal/mol, range 3')!;
+    const scene = layoutFigure(resolveProfile(e.doc), e.doc, { metrics, preset: 'single' });
+    expect(scene.omittedLabels).toEqual([]);
+    expect(auditCounts(auditScene(scene))).toEqual(ZERO);
+  });
+
   for (const preset of ['single', 'double', 'slide'] as const) {
     for (const theme of ['colour', 'greyscale', 'dark'] as const) {
       it(`audits clean in every document (${preset}, ${theme})`, { timeout: 60_000 }, () => {

@@ -36,7 +36,7 @@ export function labels(ctx: FigureContext, placed: readonly PlacedLevel[], paint
   };
   const bars = new Map(placed.map((l) => [l, barBox(l, ctx, paints.get(l.point.pathwayIndex)?.weight)] as const));
   const groups = stacks(ctx, twins(ctx, placed, style, measured), style, paints);
-  const requests: LabelRequest[] = groups.map((g) => request(g, bars));
+  const requests: LabelRequest[] = groups.map((g) => request(g, bars, ctx.lineMm));
   const all = placeLabels([...requests, ...extra.labels.map((l) => l.request)], { hard: [...bars.values(), ...hard], soft: [], bars: [...bars.values()] }, bounds, ctx.gapMm);
   const placements = all.slice(0, requests.length);
   const items: SceneItem[] = [];
@@ -151,14 +151,23 @@ function stacks(ctx: FigureContext, entries: readonly StackEntry[], style: Label
   return groups;
 }
 
-function request(g: Group, bars: ReadonlyMap<PlacedLevel, Box>): LabelRequest {
+/**
+ * How far a label block may sit from its own nearest level without a leader, in text line
+ * heights (our choice, the same as the geometry audit's): up to one blank line of space
+ * between a block and its bar still reads as its label; more, and a reader can no longer
+ * tell which level it names.
+ */
+const NEAR_LEVEL_LINES = 1;
+
+function request(g: Group, bars: ReadonlyMap<PlacedLevel, Box>, lineMm: number): LabelRequest {
   const levels = g.entries.flatMap((e) => e.levels);
   const top = levels[0]!;
   const own = levels.map((l) => bars.get(l)!);
+  const farMm = NEAR_LEVEL_LINES * lineMm;
   if (!g.stack) {
     const block = g.entries[0]!.block;
     return {
-      x: top.x, y: top.y, halfWidth: top.halfWidth, w: block.w, h: block.h, own,
+      x: top.x, y: top.y, halfWidth: top.halfWidth, w: block.w, h: block.h, own, farMm,
       prefer: top.point.kind === 'ts' ? 'above' : 'below',
       ...(top.point.labelOffsetMm ? { fixed: top.point.labelOffsetMm } : {}),
     };
@@ -166,7 +175,7 @@ function request(g: Group, bars: ReadonlyMap<PlacedLevel, Box>): LabelRequest {
   const ys = levels.map((l) => l.y);
   const ts = levels.filter((l) => l.point.kind === 'ts').length;
   return {
-    x: top.x, y: top.y, halfWidth: Math.max(...levels.map((l) => l.halfWidth)), w: g.stack.w, h: g.stack.h, own,
+    x: top.x, y: top.y, halfWidth: Math.max(...levels.map((l) => l.halfWidth)), w: g.stack.w, h: g.stack.h, own, farMm,
     nearMm: Math.max(...g.entries.map((e) => e.block.h)),
     yTop: Math.min(...ys), yBottom: Math.max(...ys), prefer: 2 * ts >= levels.length ? 'above' : 'below',
   };

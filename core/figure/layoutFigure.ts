@@ -82,7 +82,25 @@ export function layoutFigure(profile: ResolvedProfile, doc: Document, options: L
   const tallest = Math.max(0, ...[...measured.values()].map((b) => b.h));
   const stacked = stackDepth(known);
   const pad = (lines: number) => Math.max(tallest, lines * ctx.lineMm) + 3 * ctx.gapMm;
-  const scale = energyScale(energies, y1 - pad(stacked.bottom) - room.below, y0 + pad(stacked.top) + room.above, 5, 1.5 * ctx.lineMm);
+  let bottomMm = y1 - pad(stacked.bottom) - room.below;
+  let topMm = y0 + pad(stacked.top) + room.above;
+  let scale = energyScale(energies, bottomMm, topMm, 5, 1.5 * ctx.lineMm);
+  // Stacks are joined by mm, not energy: measure them on this scale, and where the stack at
+  // a slot's top (bottom) reaches past the plot, leave it the room (twice: the new scale
+  // may join one more level).
+  for (let pass = 0; pass < 2; pass++) {
+    const short = stackShortfall(known, scale.y, { top: y0, bottom: y1, join: tallest + 6 * ctx.gapMm, line: STACK_LINE * ctx.lineMm, gap: 3 * ctx.gapMm });
+    const up = Math.max(0, short.top);
+    const down = Math.max(0, short.bottom);
+    if (up + down <= 1e-3) break;
+    // The levels keep at least a quarter of the plot; the room is shared in proportion.
+    const spare = bottomMm - topMm - MIN_LEVEL_SPAN * (y1 - y0);
+    if (spare <= 1e-3) break;
+    const k = Math.min(1, spare / (up + down));
+    topMm += k * up;
+    bottomMm -= k * down;
+    scale = energyScale(energies, bottomMm, topMm, 5, 1.5 * ctx.lineMm);
+  }
 
   const slots = pathways.flatMap((p) => p.points.map((q) => q.slot));
   const lo = Math.min(0, ...slots);
@@ -119,6 +137,35 @@ export function layoutFigure(profile: ResolvedProfile, doc: Document, options: L
   if (fig.showCoordinateArrow) items.push(...coordinateArrow(ctx, plot.x, x1, y1 + margin / 2));
   // Layer order (connectors under levels under labels, …) so the canvas, SVG and PDF stack alike.
   return { widthMm: size.widthMm, heightMm: size.heightMm, background: theme.background, fontFamily: options.metrics.family, items: inLayerOrder(items), omittedLabels: [...placedLabels.omitted, ...molecules.omitted] };
+}
+
+/** Height of one line of a stacked label in text line heights: raised marks (‡, superscripts) and the air between lines (our allowance, see stackBlock). */
+const STACK_LINE = 1.2;
+/** Least share of the plot height the levels span when stacked labels claim room at its ends (our choice). */
+const MIN_LEVEL_SPAN = 0.4;
+
+/**
+ * How far the stacked label above each slot's top level (below its bottom level) would
+ * reach past the plot's top (bottom), at most, in mm: levels of one slot closer than `join`
+ * mm join one stack (as labels.ts joins them), a stack takes `line` mm a level plus `gap`.
+ * Negative when every stack fits. One sort per slot, no pairwise work.
+ */
+function stackShortfall(points: readonly { slot: number; energy: number }[], y: (e: number) => number, o: { top: number; bottom: number; join: number; line: number; gap: number }): { top: number; bottom: number } {
+  const bySlot = new Map<number, number[]>();
+  for (const q of points) bySlot.set(q.slot, [...(bySlot.get(q.slot) ?? []), y(q.energy)]);
+  let top = -Infinity;
+  let bottom = -Infinity;
+  for (const ys of bySlot.values()) {
+    // Twins (one spot) print one line.
+    const sorted = [...new Set(ys.map((v) => Math.round(v * 100) / 100))].sort((a, b) => a - b);
+    let n = 1;
+    while (n < sorted.length && sorted[n]! - sorted[n - 1]! < o.join) n++;
+    top = Math.max(top, n * o.line + o.gap - (sorted[0]! - o.top));
+    let m = 1;
+    while (m < sorted.length && sorted[sorted.length - m]! - sorted[sorted.length - m - 1]! < o.join) m++;
+    bottom = Math.max(bottom, m * o.line + o.gap - (o.bottom - sorted[sorted.length - 1]!));
+  }
+  return { top, bottom };
 }
 
 /**

@@ -27,6 +27,8 @@ export interface LabelRequest {
   own?: readonly Box[];
   /** How far along its line a label may move and still count as next to its level (default h). */
   nearMm?: number;
+  /** A spot whose box lies farther than this from its nearest own bar needs a leader line (default: no limit). */
+  farMm?: number;
 }
 
 /** A straight leader line from a level to its label, mm. */
@@ -126,7 +128,7 @@ function ownLevelJudge(r: LabelRequest, own: readonly Box[], gap: number, hard: 
       const d = boxDistance(box, b);
       if (d < ownD) [ownD, nearest] = [d, b];
     }
-    let next = distance <= (r.nearMm ?? r.h);
+    let next = distance <= (r.nearMm ?? r.h) && ownD <= (r.farMm ?? Infinity);
     if (next) next = !bars.touching(grow(box, ownD)).some((b) => !mine.has(b) && boxDistance(box, b) < ownD - 1e-3);
     if (next) {
       const gapBox = between(box, nearest, gap);

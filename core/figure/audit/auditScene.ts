@@ -13,7 +13,8 @@ export interface AuditFault {
  * - `crossings`: a stroke or filled shape through text (leaders of a label not counted against it);
  * - `overlaps`: two text items closer than the clearance (lines of one label block excepted);
  * - `misread`: a level label, without a leader line, whose nearest level is another one,
- *   or with another stroke or text between it and its own level;
+ *   farther than `FAR_LINES` of its text lines from its own level, or with another stroke or
+ *   text between it and its own level;
  * - `offPage`: text less than the page margin from the edge;
  * - `legendOverContent`: the legend's extent reaching any non-legend item.
  */
@@ -34,6 +35,16 @@ export interface AuditOptions {
 }
 
 const EPS = 1e-6;
+
+/**
+ * A label block farther than this many of its text line heights from its own level, with no
+ * leader, counts as misread (our choice): up to one blank line of space between a block and
+ * its bar still reads as that level's label; more, and a reader can no longer tell which
+ * level it names, even when no other level is nearer (a stack pushed into a corner of the
+ * plot). Tighter than 1.5 lines on purpose: a two-line stack left 5.4 mm (1.4 lines) below
+ * its bars already read as loose.
+ */
+const FAR_LINES = 1;
 
 /**
  * Audits any scene, however it was placed (the placement modules never call this): every
@@ -101,6 +112,11 @@ function misreadLabels(p: ScenePrimitives, name: (i: number) => string): AuditFa
     const nearer = p.bars.find((b) => !owners.includes(b.key) && distance(box, barBox(b)) < ownDistance - 1e-3);
     if (nearer) {
       faults.push({ items, detail: `${name(items[0]!)}: nearest level is ${nearer.key}, not its own` });
+      continue;
+    }
+    const lineMm = Math.max(...lines.map((l) => l.box.h));
+    if (ownDistance > FAR_LINES * lineMm + EPS) {
+      faults.push({ items, detail: `${name(items[0]!)}: ${ownDistance.toFixed(1)} mm from its level with no leader` });
       continue;
     }
     const bar = own.find((b) => distance(box, barBox(b)) <= ownDistance + EPS)!;

@@ -16,6 +16,21 @@ describe('the figure corpus (issue 11)', () => {
     expect(FIGURE_CORPUS.some((e) => e.doc.pathways.some((p) => p.cycle))).toBe(true);
   });
 
+  it('keeps the stacks of long labels by their bars at 85 mm, or leads them there (follow-up: two-line stacks sat 5 mm off with no leader)', () => {
+    const e = FIGURE_CORPUS.find((c) => c.name === 'long and rich-text labels')!;
+    const scene = layoutFigure(resolveProfile(e.doc), e.doc, { metrics, preset: 'single' });
+    expect(auditScene(scene).misread.map((f) => f.detail)).toEqual([]);
+    const stacks = new Set(scene.items.flatMap((i) => (i.kind === 'text' && i.block?.startsWith('stack/') ? [i.block] : [])));
+    expect(stacks.size).toBe(2);
+  });
+
+  it('leaves the plot room for a four-line stack of close transition states at 85 mm instead of leaving its labels out (follow-up: all four were left out)', () => {
+    const e = FIGURE_CORPUS.find((c) => c.name === '4 pathways × 3 points, shared slots within 3 kcal/mol, range 3')!;
+    const scene = layoutFigure(resolveProfile(e.doc), e.doc, { metrics, preset: 'single' });
+    expect(scene.omittedLabels).toEqual([]);
+    expect(auditCounts(auditScene(scene))).toEqual(ZERO);
+  });
+
   for (const preset of ['single', 'double', 'slide'] as const) {
     for (const theme of ['colour', 'greyscale', 'dark'] as const) {
       it(`audits clean in every document (${preset}, ${theme})`, { timeout: 60_000 }, () => {

@@ -56,6 +56,17 @@ describe('auditScene', () => {
     expect(auditCounts(auditScene(scene([...items, leader]))).misread).toBe(0);
   });
 
+  it('counts a label block more than one of its line heights from its own level, unless a leader joins them', () => {
+    // Two 4 mm lines; nothing else in the plot, so its own level is the nearest one.
+    const block = (y: number) => [text(20, y, 30, 4, { ...ids('a', 'p'), block: 's' }), text(20, y + 4, 30, 4, { ...ids('a', 'p'), block: 's' })];
+    expect(auditCounts(auditScene(scene([bar(50, 30, 'a', 'p'), ...block(31.5)]))).misread).toBe(0);
+    const far = auditScene(scene([bar(50, 30, 'a', 'p'), ...block(35)]));
+    expect(auditCounts(far).misread).toBe(1);
+    expect(far.misread[0]!.detail).toMatch(/4\.9 mm from its level/);
+    const leader = line(50, 30, 50, 35, { role: 'leader', ...ids('a', 'p') });
+    expect(auditCounts(auditScene(scene([bar(50, 30, 'a', 'p'), ...block(35), leader]))).misread).toBe(0);
+  });
+
   it('counts a connector lying between a label and its own level', () => {
     const a = auditScene(scene([bar(50, 30, 'a', 'p'), text(46, 22, 8, 4, ids('a', 'p')), line(30, 28, 70, 28, { pathway: 'b' })]));
     expect(auditCounts(a).misread).toBe(1);

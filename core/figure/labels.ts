@@ -35,9 +35,18 @@ export function labels(ctx: FigureContext, placed: readonly PlacedLevel[], paint
     energyFormat: ctx.doc.figure.energyFormat, unit: ctx.unit, daggerOnTs: ctx.doc.figure.daggerOnTs, autoSubscript: ctx.autoSubscript,
   };
   const bars = new Map(placed.map((l) => [l, barBox(l, ctx, paints.get(l.point.pathwayIndex)?.weight)] as const));
-  const groups = stacks(ctx, twins(ctx, placed, style, measured), style, paints);
-  const requests: LabelRequest[] = groups.map((g) => request(g, bars, ctx.lineMm));
-  const all = placeLabels([...requests, ...extra.labels.map((l) => l.request)], { hard: [...bars.values(), ...hard], soft: [], bars: [...bars.values()] }, bounds, ctx.gapMm);
+  const place = (gs: readonly Group[]) => {
+    const rs = gs.map((g) => request(g, bars, ctx.lineMm));
+    return { requests: rs, all: placeLabels([...rs, ...extra.labels.map((l) => l.request)], { hard: [...bars.values(), ...hard], soft: [], bars: [...bars.values()] }, bounds, ctx.gapMm) };
+  };
+  let groups = stacks(ctx, twins(ctx, placed, style, measured), style, paints);
+  let { requests, all } = place(groups);
+  // A stack with no spot as one block is tried once more as two (its upper and its lower
+  // levels), so a crowded slot loses as few labels as it must, not all of them at once.
+  if (groups.some((g, i) => g.stack && all[i] === null)) {
+    groups = groups.flatMap((g, i) => (g.stack && all[i] === null ? halves(ctx, g, style, paints) : [g]));
+    ({ requests, all } = place(groups));
+  }
   const placements = all.slice(0, requests.length);
   const items: SceneItem[] = [];
   const omitted: OmittedLabel[] = [];
@@ -149,6 +158,16 @@ function stacks(ctx: FigureContext, entries: readonly StackEntry[], style: Label
     flush();
   }
   return groups;
+}
+
+/** A stack split into its upper and lower levels, each a stack again or a single label. */
+function halves(ctx: FigureContext, g: Group, style: LabelStyle, paints: ReadonlyMap<number, PathwayPaint>): Group[] {
+  const mid = Math.ceil(g.entries.length / 2);
+  return [g.entries.slice(0, mid), g.entries.slice(mid)].map((run): Group => {
+    if (run.length === 1) return { entries: run };
+    const first = run[0]!.levels[0]!.point;
+    return { entries: run, stack: stackBlock(ctx, run, style, paints, `stack/${first.pathwayId}/${first.pointId}`) };
+  });
 }
 
 /**

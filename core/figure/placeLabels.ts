@@ -3,6 +3,7 @@ import { cheapestSpot, spotSearch, type SpotJudge, type SpotLine, type SpotSearc
 import { columnIndex } from './columnIndex.ts';
 import { eachPiece, pathPieces } from './pathPieces.ts';
 import type { Box } from './scene.ts';
+import { boxDistance, growBox } from './geometry.ts';
 
 /** A label to place next to its level bar (or beside an annotation's arrow). */
 export interface LabelRequest {
@@ -129,7 +130,7 @@ function ownLevelJudge(r: LabelRequest, own: readonly Box[], gap: number, hard: 
       if (d < ownD) [ownD, nearest] = [d, b];
     }
     let next = distance <= (r.nearMm ?? r.h) && ownD <= (r.farMm ?? Infinity);
-    if (next) next = !bars.touching(grow(box, ownD)).some((b) => !mine.has(b) && boxDistance(box, b) < ownD - 1e-3);
+    if (next) next = !bars.touching(growBox(box, ownD)).some((b) => !mine.has(b) && boxDistance(box, b) < ownD - 1e-3);
     if (next) {
       const gapBox = between(box, nearest, gap);
       if (gapBox) next = !hard.touching(gapBox).some((b) => !mine.has(b));
@@ -166,15 +167,7 @@ function between(a: Box, b: Box, inset: number): Box | null {
   return right - left > 0.1 ? { x: left + 0.05, y: y0, w: right - left - 0.1, h: y1 - y0 } : null;
 }
 
-function boxDistance(a: Box, b: Box): number {
-  const dx = Math.max(0, b.x - (a.x + a.w), a.x - (b.x + b.w));
-  const dy = Math.max(0, b.y - (a.y + a.h), a.y - (b.y + b.h));
-  return Math.hypot(dx, dy);
-}
 
-function grow(b: Box, by: number): Box {
-  return { x: b.x - by, y: b.y - by, w: b.w + 2 * by, h: b.h + 2 * by };
-}
 
 /**
  * Fills the candidate lines in order of preference, with their extra cost (multiples of

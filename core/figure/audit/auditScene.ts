@@ -1,6 +1,7 @@
 import type { Box, Scene } from '../scene.ts';
 import { scenePrimitives, type Bar, type ScenePrimitives, type TextBox } from './scenePrimitives.ts';
 import { segmentHitsBox } from './segmentHitsBox.ts';
+import { boxDistance, growBox } from '../geometry.ts';
 
 /** One fault the audit found: which rule, which scene items (indices into `scene.items`), in words. */
 export interface AuditFault {
@@ -66,11 +67,11 @@ export function auditScene(scene: Scene, options: AuditOptions = {}): FigureAudi
     for (const s of p.strokes) {
       if (s.role === 'leader' && t.owners.includes(`${s.pathway ?? ''}/${s.point ?? ''}`)) continue;
       if (sameGroup(s.item, t.item)) continue;
-      if (segmentHitsBox(s.x0, s.y0, s.x1, s.y1, grow(t.box, s.half + clear))) {
+      if (segmentHitsBox(s.x0, s.y0, s.x1, s.y1, growBox(t.box, s.half + clear))) {
         audit.crossings.push({ items: [s.item, t.item], detail: `${s.role} through ${name(t.item)}` });
       }
     }
-    for (const a of p.areas) if (!sameGroup(a.item, t.item) && intersects(a.box, grow(t.box, clear))) audit.crossings.push({ items: [a.item, t.item], detail: `${a.role} shape over ${name(t.item)}` });
+    for (const a of p.areas) if (!sameGroup(a.item, t.item) && intersects(a.box, growBox(t.box, clear))) audit.crossings.push({ items: [a.item, t.item], detail: `${a.role} shape over ${name(t.item)}` });
     const b = t.box;
     if (b.x < margin - EPS || b.y < margin - EPS || b.x + b.w > scene.widthMm - margin + EPS || b.y + b.h > scene.heightMm - margin + EPS) {
       audit.offPage.push({ items: [t.item], detail: `${name(t.item)} within ${margin} mm of the page edge` });
@@ -80,7 +81,7 @@ export function auditScene(scene: Scene, options: AuditOptions = {}): FigureAudi
     for (const b of p.texts.slice(i + 1)) {
       if (a.block !== null && a.block === b.block) continue;
       if (sameGroup(a.item, b.item)) continue;
-      if (intersects(grow(a.box, clear / 2), grow(b.box, clear / 2))) audit.overlaps.push({ items: [a.item, b.item], detail: `${name(a.item)} overlaps ${name(b.item)}` });
+      if (intersects(growBox(a.box, clear / 2), growBox(b.box, clear / 2))) audit.overlaps.push({ items: [a.item, b.item], detail: `${name(a.item)} overlaps ${name(b.item)}` });
     }
   });
   audit.misread.push(...misreadLabels(p, name));
@@ -108,8 +109,8 @@ function misreadLabels(p: ScenePrimitives, name: (i: number) => string): AuditFa
     const items = lines.map((l) => l.item);
     const own = p.bars.filter((b) => owners.includes(b.key));
     if (own.length === 0) continue;
-    const ownDistance = Math.min(...own.map((b) => distance(box, barBox(b))));
-    const nearer = p.bars.find((b) => !owners.includes(b.key) && distance(box, barBox(b)) < ownDistance - 1e-3);
+    const ownDistance = Math.min(...own.map((b) => boxDistance(box, barBox(b))));
+    const nearer = p.bars.find((b) => !owners.includes(b.key) && boxDistance(box, barBox(b)) < ownDistance - 1e-3);
     if (nearer) {
       faults.push({ items, detail: `${name(items[0]!)}: nearest level is ${nearer.key}, not its own` });
       continue;
@@ -119,7 +120,7 @@ function misreadLabels(p: ScenePrimitives, name: (i: number) => string): AuditFa
       faults.push({ items, detail: `${name(items[0]!)}: ${ownDistance.toFixed(1)} mm from its level with no leader` });
       continue;
     }
-    const bar = own.find((b) => distance(box, barBox(b)) <= ownDistance + EPS)!;
+    const bar = own.find((b) => boxDistance(box, barBox(b)) <= ownDistance + EPS)!;
     const gap = between(box, barBox(bar));
     if (!gap) continue;
     const ownBars = new Set(own.map((b) => b.key));
@@ -135,7 +136,7 @@ function legendFaults(p: ScenePrimitives, name: (i: number) => string): AuditFau
   if (legendBoxes.length === 0) return [];
   const key = union(legendBoxes);
   const faults: AuditFault[] = [];
-  for (const s of p.strokes) if (s.role !== 'legend' && segmentHitsBox(s.x0, s.y0, s.x1, s.y1, grow(key, s.half))) faults.push({ items: [s.item], detail: `${s.role} inside the legend` });
+  for (const s of p.strokes) if (s.role !== 'legend' && segmentHitsBox(s.x0, s.y0, s.x1, s.y1, growBox(key, s.half))) faults.push({ items: [s.item], detail: `${s.role} inside the legend` });
   for (const t of p.texts) if (t.role !== 'legend' && intersects(t.box, key)) faults.push({ items: [t.item], detail: `${name(t.item)} inside the legend` });
   for (const a of p.areas) if (intersects(a.box, key)) faults.push({ items: [a.item], detail: `${a.role} shape inside the legend` });
   return faults;
@@ -164,18 +165,10 @@ function barBox(b: Bar): Box {
 }
 
 function pieceBox(s: { x0: number; y0: number; x1: number; y1: number; half: number }): Box {
-  return grow({ x: Math.min(s.x0, s.x1), y: Math.min(s.y0, s.y1), w: Math.abs(s.x1 - s.x0), h: Math.abs(s.y1 - s.y0) }, s.half);
+  return growBox({ x: Math.min(s.x0, s.x1), y: Math.min(s.y0, s.y1), w: Math.abs(s.x1 - s.x0), h: Math.abs(s.y1 - s.y0) }, s.half);
 }
 
-function distance(a: Box, b: Box): number {
-  const dx = Math.max(0, b.x - (a.x + a.w), a.x - (b.x + b.w));
-  const dy = Math.max(0, b.y - (a.y + a.h), a.y - (b.y + b.h));
-  return Math.hypot(dx, dy);
-}
 
-function grow(b: Box, by: number): Box {
-  return { x: b.x - by, y: b.y - by, w: b.w + 2 * by, h: b.h + 2 * by };
-}
 
 function intersects(a: Box, b: Box): boolean {
   return a.x < b.x + b.w - EPS && b.x < a.x + a.w - EPS && a.y < b.y + b.h - EPS && b.y < a.y + a.h - EPS;

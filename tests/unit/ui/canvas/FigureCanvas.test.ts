@@ -70,7 +70,7 @@ describe('FigureCanvas on a figure too small for its labels', () => {
 });
 
 describe('FigureCanvas connectors', () => {
-  it('a connector is a labelled control; picking it describes its step with barriers, ΔrG and k', async () => {
+  it('a step is one labelled control; picking either half describes its step with barriers, ΔrG and k', async () => {
     // Route fixture: A 0, TS +20.0, B −5.0 kcal/mol, so the step A → TS → B has ΔG‡ +20.0
     // forward, +25.0 back and ΔrG −5.0. k = (k_B T/h) exp(−ΔG‡/RT) at 298.15 K with
     // ΔG‡ = 83.68 kJ/mol: 6.212 × 10¹² s⁻¹ × exp(−33.756) = 0.0136 s⁻¹ (CODATA 2018 k_B, h, R;
@@ -78,12 +78,14 @@ describe('FigureCanvas connectors', () => {
     const store = routeStore();
     render(FigureCanvas, { store, scene: sceneOf(store) });
     const expected = 'Step A → TS → B (Route): ΔG‡ +20.0 kcal mol⁻¹ forward, +25.0 kcal mol⁻¹ back; ΔrG −5.0 kcal mol⁻¹; k forward 0.0136 s⁻¹';
-    const connectors = screen.getAllByRole('button', { name: expected });
-    expect(connectors).toHaveLength(2);
-    await fireEvent.click(connectors[1]!);
-    expect(connectors[1]!.getAttribute('aria-pressed')).toBe('true');
+    // One keyboard stop for the step; the pointer picks either drawn half.
+    const stop = screen.getByRole('button', { name: expected });
+    const halves = document.querySelectorAll('path.step-hit');
+    expect(halves).toHaveLength(2);
+    await fireEvent.click(halves[1]!);
+    expect(stop.getAttribute('aria-pressed')).toBe('true');
     expect(screen.getByText(expected, { selector: 'p' })).toBeTruthy();
-    await fireEvent.keyDown(connectors[1]!, { key: 'Enter' });
+    await fireEvent.keyDown(stop, { key: 'Enter' });
     expect(screen.queryByText(expected, { selector: 'p' })).toBeNull();
   });
 });

@@ -80,7 +80,7 @@ test('an absurd energy is refused with its bound named; the figure keeps finite 
   // Hard bound of a relative energy: ±100 000 kJ/mol (core/model/bounds.ts, common practice).
   await expect(ts2).toHaveValue('1e308');
   await expect(ts2).toHaveAttribute('aria-invalid', 'true');
-  await expect(pointRow(page, CAT, 4).getByRole('alert')).toContainText('is outside -100000 to 100000 kJ/mol');
+  await expect(pointRow(page, CAT, 4).getByRole('alert')).toContainText('is outside −100000 to 100000 kJ/mol');
   await expect(pointRow(page, CAT, 4).getByRole('cell').nth(4)).toHaveText('unresolved');
   await expect(page.locator('section.findings')).toContainText('the energy of "TS2" reads "1e308"');
   await expect(page.locator('body')).not.toContainText('Infinity');

@@ -12,6 +12,7 @@ import { writeOutput } from './writeOutput.ts';
 import { noteLargeWork } from './largeWork.ts';
 import { missingGlyphs, missingGlyphsMessage } from '../export/missingGlyphs.ts';
 import { readFontMetrics } from '../figure/font/fontMetrics.ts';
+import { energyDecimals } from '../format/energyDecimals.ts';
 
 export interface ReportCliOptions { output?: string | undefined; unit?: string | undefined; temperature?: string | undefined }
 
@@ -37,6 +38,6 @@ export async function runReport(file: string, options: ReportCliOptions, io: Cli
 export async function runTables(file: string, options: ReportCliOptions, io: CliIo): Promise<void> {
   const output = outputOf(options, ['.csv', '.md'], 'tables');
   const doc = applySettingOptions(loadInput(file, io), options);
-  const tables = analysisTables(analysisReport(doc, analyseDocument(doc)), doc.settings.decimals);
+  const tables = analysisTables(analysisReport(doc, analyseDocument(doc)), energyDecimals(doc.settings, doc.settings.unit));
   await writeOutput(output, extname(output).toLowerCase() === '.md' ? tablesToMarkdown(tables, doc.title) : tablesToCsv(tables), io);
 }

@@ -2,6 +2,7 @@ import type { Document, Point } from '../model/schema.ts';
 import { fromJoulesPerMol } from '../units/energy.ts';
 import { mapPoint } from './mapPathway.ts';
 import type { PointRef } from './pointEdits.ts';
+import { energyDecimals } from '../format/energyDecimals.ts';
 
 /**
  * Why a point's level cannot be dragged up or down, or null when it can. Only energies the
@@ -28,9 +29,9 @@ export function dragEnergy(doc: Document, args: PointRef & { deltaJ: number }): 
   return mapPoint(doc, args.pathway, args.point, (p) => {
     const e = p.energy;
     if (dragBlockedReason(p) !== null || !('value' in e)) return p;
-    const step = 10 ** -doc.settings.decimals;
+    const step = 10 ** -energyDecimals(doc.settings, e.unit);
     const value = Math.round((e.value + fromJoulesPerMol(args.deltaJ, e.unit)) / step) * step;
-    const clean = Number(value.toFixed(doc.settings.decimals)) + 0;
+    const clean = Number(value.toFixed(energyDecimals(doc.settings, e.unit))) + 0;
     return clean === e.value ? p : { ...p, energy: { ...e, value: clean } };
   });
 }

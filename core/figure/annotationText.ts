@@ -3,10 +3,11 @@ import type { AnnotationPlan } from './annotationPlans.ts';
 import type { FigureContext } from './figureContext.ts';
 import { layoutRichText, type RichLine } from './text/layoutRichText.ts';
 import type { Span } from './text/parseMarkup.ts';
+import { energyDecimals } from '../format/energyDecimals.ts';
 
 /** An energy difference for an annotation: fixed decimals, U+2212 for minus, the unit when the figure prints units. */
 export function differenceText(value: number, ctx: FigureContext): string {
-  const fixed = Math.abs(value).toFixed(ctx.doc.settings.decimals);
+  const fixed = Math.abs(value).toFixed(energyDecimals(ctx.doc.settings, ctx.unit));
   const signed = value < 0 && Number(fixed) !== 0 ? `\u2212${fixed}` : fixed;
   return ctx.doc.figure.energyFormat === 'withUnit' ? `${signed} ${unitLabel(ctx.unit)}` : signed;
 }

@@ -8,6 +8,7 @@ import type { AnnotationLabel } from './annotationShapes.ts';
 import type { Box, OmittedLabel, PathItem, SceneItem } from './scene.ts';
 import { stackBlock, type StackEntry } from './stackBlock.ts';
 import { textItem } from './text/textItem.ts';
+import { energyDecimals } from '../format/energyDecimals.ts';
 
 /** Levels that get one label: a level with its twins (the same state in other pathways), or a stack of close levels at one slot. */
 interface Group {
@@ -31,7 +32,7 @@ interface Group {
  */
 export function labels(ctx: FigureContext, placed: readonly PlacedLevel[], paints: ReadonlyMap<number, PathwayPaint>, bounds: Box, hard: readonly Box[], extra: { labels: readonly AnnotationLabel[] } = { labels: [] }, measured: ReadonlyMap<LayoutPoint, LabelBlock> = new Map()): { items: SceneItem[]; boxes: Box[]; annotationBoxes: Box[]; omitted: OmittedLabel[] } {
   const style: LabelStyle = {
-    metrics: ctx.metrics, sizeMm: ctx.sizeMm, decimals: ctx.doc.settings.decimals,
+    metrics: ctx.metrics, sizeMm: ctx.sizeMm, decimals: energyDecimals(ctx.doc.settings, ctx.unit),
     energyFormat: ctx.doc.figure.energyFormat, unit: ctx.unit, daggerOnTs: ctx.doc.figure.daggerOnTs, autoSubscript: ctx.autoSubscript,
   };
   const bars = new Map(placed.map((l) => [l, barBox(l, ctx, paints.get(l.point.pathwayIndex)?.weight)] as const));

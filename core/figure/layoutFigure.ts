@@ -20,6 +20,7 @@ import { inLayerOrder } from './sceneLayers.ts';
 import { THEMES, type ThemeName } from './themes.ts';
 import type { PointDrawing } from '../structure/pointDepictions.ts';
 import { grownHeight, structureLayer, structureRoom } from './structures/structureLayer.ts';
+import { energyDecimals } from '../format/energyDecimals.ts';
 
 /** Text keeps at least this far inside the page (issue 11's rule: 1 mm; a little more for rounding). */
 export const PAGE_MARGIN_MM = 1.2;
@@ -77,7 +78,7 @@ export function layoutFigure(profile: ResolvedProfile, doc: Document, options: L
   const plot = { x: left, y: y0, w: x1 - left, h: y1 - y0 };
 
   // Room for a label above the highest and below the lowest level.
-  const style = { ...ctx, decimals: doc.settings.decimals, energyFormat: fig.energyFormat, daggerOnTs: fig.daggerOnTs };
+  const style = { ...ctx, decimals: energyDecimals(doc.settings, ctx.unit), energyFormat: fig.energyFormat, daggerOnTs: fig.daggerOnTs };
   const measured = new Map(known.slice(0, 200).map((q) => [q, labelBlock(q.label, q.kind, q.energy, style)] as const));
   const tallest = Math.max(0, ...[...measured.values()].map((b) => b.h));
   const stacked = stackDepth(known);

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { convertEnergy, type EnergyUnit } from '../units/energy.ts';
 import { describe } from './describe.ts';
-import { BOUNDS, outsideHard, type BoundName } from './bounds.ts';
+import { BOUNDS, formatLimit, outsideHard, type BoundName } from './bounds.ts';
 
 const typeError = (what: string) => (issue: { input: unknown }) => `expected a number${what}, got ${describe(issue.input)}`;
 
@@ -28,7 +28,7 @@ export function boundedText() {
   return z.string().max(max, { error: (issue) => `text of ${(issue.input as string).length} characters is longer than the limit of ${max} characters` });
 }
 
-const round = (v: number) => Number(v.toPrecision(6));
+const round = (v: number) => formatLimit(Number(v.toPrecision(6)));
 
 /**
  * Message for an energy `value` written in `unit` outside a bound given in kJ/mol, or null.
@@ -38,7 +38,7 @@ export function energyOutsideHard(name: 'relativeEnergyKJ' | 'reorganisationKJ',
   const b = BOUNDS[name];
   const [lo, hi] = b.hard.map((v) => convertEnergy(v, 'kJ/mol', unit)) as [number, number];
   if (value >= lo && value <= hi) return null;
-  const inKJ = unit === 'kJ/mol' ? '' : ` (${b.hard[0]} to ${b.hard[1]} kJ/mol)`;
+  const inKJ = unit === 'kJ/mol' ? '' : ` (${formatLimit(b.hard[0])} to ${formatLimit(b.hard[1])} kJ/mol)`;
   return `${b.what} ${value} ${unit} is outside ${round(lo)} to ${round(hi)} ${unit}${inKJ}`;
 }
 

@@ -1,3 +1,5 @@
+import { formatScientific } from '../format/formatScientific.ts';
+
 /**
  * The one table of limits for numbers a user can enter (document schema, editor fields and
  * command-line options all read it). `hard` is the range outside which a value is refused
@@ -74,12 +76,26 @@ export const BOUNDS = {
 
 export type BoundName = keyof typeof BOUNDS;
 
+/**
+ * A limit for a message in the app's notation: exact and plain from 0.001 to below a million
+ * ("10000", "−23900.6", "0.05"), else powers of ten ("1 × 10²⁰", "1 × 10⁻¹⁵") as
+ * formatScientific writes them, without its padding zeros (limits are round numbers);
+ * always the typographic minus.
+ */
+export function formatLimit(value: number): string {
+  const abs = Math.abs(value);
+  if (value === 0 || (abs >= 1e-3 && abs < 1e6)) return String(value).replace('-', '\u2212');
+  return formatScientific(value).replace(/\.?0+ ×/, ' ×');
+}
+
+const range = (b: Bound, which: 'hard' | 'usual') => `${formatLimit(b[which][0])} to ${formatLimit(b[which][1])}${b.unit ? ` ${b.unit}` : ''}`;
+
 /** Message for a value outside the hard range, or null when it is inside. */
 export function outsideHard(name: BoundName, value: number): string | null {
   const b = BOUNDS[name];
   if (!Number.isFinite(value)) return `expected a finite ${b.what}, got ${value}`;
   if (value >= b.hard[0] && value <= b.hard[1]) return null;
-  return `${b.what} ${value}${b.unit ? ` ${b.unit}` : ''} is outside ${b.hard[0]} to ${b.hard[1]}${b.unit ? ` ${b.unit}` : ''}`;
+  return `${b.what} ${value}${b.unit ? ` ${b.unit}` : ''} is outside ${range(b, 'hard')}`;
 }
 
 /** Message for a value inside the hard range but outside the usual one, or null. */
@@ -87,5 +103,5 @@ export function outsideUsual(name: BoundName, value: number): string | null {
   const b = BOUNDS[name];
   if (outsideHard(name, value) !== null) return null;
   if (value >= b.usual[0] && value <= b.usual[1]) return null;
-  return `${b.what} ${value}${b.unit ? ` ${b.unit}` : ''} is unusual (usually ${b.usual[0]} to ${b.usual[1]}${b.unit ? ` ${b.unit}` : ''})`;
+  return `${b.what} ${value}${b.unit ? ` ${b.unit}` : ''} is unusual (usually ${range(b, 'usual')})`;
 }

@@ -80,7 +80,7 @@ test('an absurd energy is refused with its bound named; the figure keeps finite 
   // Hard bound of a relative energy: ±100 000 kJ/mol (core/model/bounds.ts, common practice).
   await expect(ts2).toHaveValue('1e308');
   await expect(ts2).toHaveAttribute('aria-invalid', 'true');
-  await expect(pointRow(page, CAT, 4).getByRole('alert')).toContainText('is outside -100000 to 100000 kJ/mol');
+  await expect(pointRow(page, CAT, 4).getByRole('alert')).toContainText('is outside −100000 to 100000 kJ/mol');
   await expect(pointRow(page, CAT, 4).getByRole('cell').nth(4)).toHaveText('unresolved');
   await expect(page.locator('section.findings')).toContainText('the energy of "TS2" reads "1e308"');
   await expect(page.locator('body')).not.toContainText('Infinity');
@@ -129,4 +129,28 @@ test('Tab from the figure reaches the first level before any connector, and each
   await expect(page.locator(':focus')).toHaveAttribute('data-kind', 'level');
   const stops = await page.getByRole('button', { name: /^Step AE → TS-th → LC \(Thermal\)/ }).count();
   expect(stops).toBe(1);
+});
+
+test('New with unsaved changes asks for a second press in the status line under the toolbar, inside a 1280 × 800 view', async ({ page }) => {
+  await page.setViewportSize({ width: 1280, height: 800 });
+  const product = field(page, CAT, 'LA + LC energy');
+  await product.fill('-40');
+  await product.press('Tab');
+  await expect(page.getByText('— unsaved changes')).toBeVisible();
+  const toolbar = page.getByRole('toolbar', { name: 'File and edit' });
+  await toolbar.getByRole('button', { name: 'New' }).click();
+  const status = page.getByRole('status').filter({ hasText: 'press New again to discard' });
+  await expect(status).toBeVisible();
+  const box = (await status.boundingBox())!;
+  const bar = (await toolbar.boundingBox())!;
+  expect(box.x).toBeGreaterThanOrEqual(0);
+  expect(box.y).toBeGreaterThanOrEqual(0);
+  expect(box.x + box.width).toBeLessThanOrEqual(1280);
+  expect(box.y + box.height).toBeLessThanOrEqual(800);
+  // under the toolbar that caused it, not at the foot of the page
+  expect(box.y).toBeGreaterThanOrEqual(bar.y + bar.height - 1);
+  expect(box.y - (bar.y + bar.height)).toBeLessThan(60);
+  await page.screenshot({ path: 'test-results/new-discard-status-1280.png' });
+  // the first press discards nothing
+  await expect(pointRow(page, CAT, 7).getByRole('cell').nth(4)).toHaveText('−40.0');
 });

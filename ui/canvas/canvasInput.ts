@@ -3,6 +3,7 @@ import { dragBlockedReason } from '../../core/edit/dragEnergy.ts';
 import { dragEnergy } from '../../core/edit/dragEnergy.ts';
 import { setPointX } from '../../core/edit/layoutEdits.ts';
 import { toJoulesPerMol } from '../../core/units/energy.ts';
+import { energyDecimals } from '../../core/format/energyDecimals.ts';
 
 /** The point with this id in this pathway of the document. */
 export function findPoint(doc: Document, pathway: string, point: string) {
@@ -20,7 +21,7 @@ export function levelLock(doc: Document, pathway: string, point: string): string
  * display unit (ten with Shift), left/right by a tenth of a slot (a whole slot with Shift).
  */
 export function nudge(doc: Document, pathway: string, point: string, key: string, shift: boolean, slot: number): Document | null {
-  const step = 10 ** -doc.settings.decimals * (shift ? 10 : 1);
+  const step = 10 ** -energyDecimals(doc.settings, doc.settings.unit) * (shift ? 10 : 1);
   if (key === 'ArrowUp' || key === 'ArrowDown') {
     const deltaJ = toJoulesPerMol(key === 'ArrowUp' ? step : -step, doc.settings.unit);
     return dragEnergy(doc, { pathway, point, deltaJ });

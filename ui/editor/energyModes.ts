@@ -1,6 +1,7 @@
 import type { Document, EnergySpec, Estimate, SpeciesTerm } from '../../core/model/schema.ts';
 import type { ResolvedPathway } from '../../core/profile/types.ts';
 import { convertEnergy, fromJoulesPerMol, type EnergyUnit } from '../../core/units/energy.ts';
+import { energyDecimals } from '../../core/format/energyDecimals.ts';
 
 export type EnergyMode = EnergySpec['mode'];
 
@@ -32,7 +33,8 @@ const round = (v: number, decimals: number) => Number(v.toFixed(decimals)) + 0;
  * message saying what is missing (no species yet).
  */
 export function switchMode(mode: EnergyMode, doc: Document, resolved: ResolvedPathway | undefined, index: number): EnergySpec | string {
-  const { unit, decimals } = doc.settings;
+  const { unit } = doc.settings;
+  const decimals = energyDecimals(doc.settings, unit);
   const points = resolved?.points ?? [];
   const own = points[index]?.energyJ ?? null;
   let previousMin: number | null = null;

@@ -15,6 +15,7 @@ import { analysisTables } from '../../core/export/analysisTables.ts';
 import { tablesToCsv, tablesToMarkdown } from '../../core/export/tablesDocument.ts';
 import { renderReport } from '../../core/export/renderReport.ts';
 import { svgToPng } from './svgToPng.ts';
+import { energyDecimals } from '../../core/format/energyDecimals.ts';
 
 /** What can be exported from the editor. */
 export type ExportKind = 'svg' | 'pdf' | 'png' | 'report' | 'points-csv' | 'points-md' | 'analysis-csv' | 'analysis-md';
@@ -34,7 +35,7 @@ export async function buildExport(doc: Document, analysis: DocumentAnalysis, fon
     const scene = layoutFigure(analysis.profile, doc, { metrics: font.metrics, preset: choice.preset, theme: choice.theme, ...(structures ? { structures } : {}) });
     return choice.errorBars ? addErrorBars(scene, analysis.profile, choice.errorBars) : scene;
   };
-  const tables = () => analysisTables(analysisReport(doc, analysis), doc.settings.decimals);
+  const tables = () => analysisTables(analysisReport(doc, analysis), energyDecimals(doc.settings, doc.settings.unit));
   switch (choice.kind) {
     case 'svg': { const svg = sceneToSvg(figure()); return { data: svg, mimeType: 'image/svg+xml', extension: '.svg', preview: { svg } }; }
     case 'pdf': {
@@ -55,8 +56,8 @@ export async function buildExport(doc: Document, analysis: DocumentAnalysis, fon
       const data = render ? await renderReport(doc, { fontBytes: font.bytes, preset: choice.preset, theme: choice.theme }) : new Uint8Array();
       return { data, mimeType: 'application/pdf', extension: '.pdf', preview: { svg } };
     }
-    case 'points-csv': { const text = tableToCsv(pointsTable(analysis.profile, doc.settings.decimals)); return { data: text, mimeType: 'text/csv', extension: '.csv', preview: { text } }; }
-    case 'points-md': { const text = tableToMarkdown(pointsTable(analysis.profile, doc.settings.decimals)); return { data: text, mimeType: 'text/markdown', extension: '.md', preview: { text } }; }
+    case 'points-csv': { const text = tableToCsv(pointsTable(analysis.profile, energyDecimals(doc.settings, doc.settings.unit))); return { data: text, mimeType: 'text/csv', extension: '.csv', preview: { text } }; }
+    case 'points-md': { const text = tableToMarkdown(pointsTable(analysis.profile, energyDecimals(doc.settings, doc.settings.unit))); return { data: text, mimeType: 'text/markdown', extension: '.md', preview: { text } }; }
     case 'analysis-csv': { const text = tablesToCsv(tables()); return { data: text, mimeType: 'text/csv', extension: '.csv', preview: { text } }; }
     case 'analysis-md': { const text = tablesToMarkdown(tables(), doc.title || 'Energy profile'); return { data: text, mimeType: 'text/markdown', extension: '.md', preview: { text } }; }
   }

@@ -8,6 +8,7 @@ import { analysisTables } from '../analysisTables.ts';
 import type { Table } from '../tables.ts';
 import { CAUTION, METHODS } from './methodsText.ts';
 import type { ReportPages } from './reportPages.ts';
+import { energyDecimals } from '../../format/energyDecimals.ts';
 
 const STANDARD_STATES: Record<Document['settings']['standardState'], string> = {
   'as-computed': 'as computed (no correction)',
@@ -19,7 +20,7 @@ const STANDARD_STATES: Record<Document['settings']['standardState'], string> = {
 export function reportContent(pages: ReportPages, doc: Document, analysis: DocumentAnalysis, report: AnalysisReport, scene: Scene): void {
   const s = doc.settings;
   const unit = unitLabel(report.unit);
-  const tables = analysisTables(report, s.decimals);
+  const tables = analysisTables(report, energyDecimals(s, s.unit));
   pages.heading(doc.title || 'Energy profile', 1.7);
   pages.paragraph(`Passline report: Δ${report.quantity} in ${unit} at ${report.temperatureK} K.`);
   pages.figure(scene);
@@ -33,7 +34,7 @@ export function reportContent(pages: ReportPages, doc: Document, analysis: Docum
     ['reference state', s.reference.kind === 'point' ? `${s.reference.point} of ${s.reference.pathway}` : { first: 'first point of each pathway', zero: 'one document-wide zero (typed values as typed)', species: 'a sum of species shared by all pathways' }[s.reference.kind]],
   ]);
   section(pages, 'Energies and where they come from', tables.points);
-  section(pages, 'Steps', stepsForPage(report, s.decimals), 'Rate constants from the Eyring equation with their units; t½ is the first-order half-life of the forward step.');
+  section(pages, 'Steps', stepsForPage(report, energyDecimals(s, s.unit)), 'Rate constants from the Eyring equation with their units; t½ is the first-order half-life of the forward step.');
   section(pages, 'Effective barriers', tables.effectiveBarriers);
   section(pages, 'Energetic span of catalytic cycles', tables.energeticSpans, report.pathways.some((p) => p.energeticSpan) ? `Convention: ${report.pathways.find((p) => p.energeticSpan)!.energeticSpan!.convention}.` : undefined);
   section(pages, 'Comparisons', tables.comparisons);

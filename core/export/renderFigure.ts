@@ -3,6 +3,7 @@ import { addErrorBars, type ErrorBarRanges } from '../figure/errorBars.ts';
 import { layoutFigure } from '../figure/layoutFigure.ts';
 import type { Preset } from '../figure/presets.ts';
 import type { ThemeName } from '../figure/themes.ts';
+import { outsideHard } from '../model/bounds.ts';
 import type { Document } from '../model/schema.ts';
 import type { ResolvedProfile } from '../profile/types.ts';
 import type { PointDrawing } from '../structure/pointDepictions.ts';
@@ -37,14 +38,14 @@ export interface RenderOptions {
 }
 
 /** Largest and smallest accepted values (our limits: beyond them files get silly). */
-const LIMITS = { dpi: [36, 2400], sizeMm: [10, 2000] } as const;
-
-/** A message naming the bad option, or null when the options can be rendered. */
+/** A message naming the bad option, or null when the options can be rendered (limits: core/model/bounds.ts). */
 export function checkRenderOptions(options: Pick<RenderOptions, 'dpi' | 'widthMm' | 'heightMm'>): string | null {
   const { dpi, widthMm, heightMm } = options;
-  if (dpi !== undefined && !(dpi >= LIMITS.dpi[0] && dpi <= LIMITS.dpi[1])) return `dpi: expected ${LIMITS.dpi[0]}–${LIMITS.dpi[1]}, got ${dpi}`;
+  const badDpi = dpi === undefined ? null : outsideHard('dpi', dpi);
+  if (badDpi) return `dpi: ${badDpi}`;
   for (const [name, v] of [['width', widthMm], ['height', heightMm]] as const) {
-    if (v !== undefined && !(v >= LIMITS.sizeMm[0] && v <= LIMITS.sizeMm[1])) return `${name}: expected ${LIMITS.sizeMm[0]}–${LIMITS.sizeMm[1]} mm, got ${v}`;
+    const bad = v === undefined ? null : outsideHard('figureMm', v);
+    if (bad) return `${name}: ${bad}`;
   }
   return null;
 }

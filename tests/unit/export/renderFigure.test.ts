@@ -34,8 +34,8 @@ describe('renderFigure', () => {
   });
 
   it('names a bad option and refuses PNG without a rasteriser', async () => {
-    expect(checkRenderOptions({ dpi: 0 })).toMatch(/^dpi: expected/);
-    expect(checkRenderOptions({ widthMm: -5 })).toMatch(/^width: expected/);
+    expect(checkRenderOptions({ dpi: 0 })).toBe('dpi: resolution 0 dpi is outside 36 to 2400 dpi');
+    expect(checkRenderOptions({ widthMm: -5 })).toBe('width: figure size -5 mm is outside 20 to 2000 mm');
     expect(checkRenderOptions({ dpi: 600, widthMm: 85 })).toBeNull();
     const { doc, profile } = twoPathways();
     await expect(renderPure(profile, doc, { format: 'png', fontBytes })).rejects.toThrow(/rasteriser/);

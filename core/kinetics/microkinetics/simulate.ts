@@ -10,6 +10,9 @@ import { invariantProjection } from './invariantProjection.ts';
 import { firstLogTime, timeGrid } from './timeGrid.ts';
 import { turnoverSlope } from './turnoverSlope.ts';
 
+/** Fewest turnovers per catalyst in the window from which a TOF is read. */
+const MIN_TURNOVERS = 1e-6;
+
 /** Slope and end-point rate must agree this closely to call the cycle steady. */
 const STEADY_AGREEMENT = 1e-3;
 
@@ -76,6 +79,13 @@ function readTurnovers(
   const slope = turnoverSlope(windowStart, states[k0]![tally]!, t1, last[tally]!, catalystTotal);
   const endRate = compiled.netRate(network.turnoverReaction!, last) / catalystTotal;
   const floor = (10 * atol) / (catalystTotal * (t1 - windowStart));
+  // A window with fewer than 10⁻⁶ turnovers per catalyst holds no TOF: the count is then the
+  // start-up transient and the solver's error, not a steady rate (at 10⁻¹⁵ s it read −3 × 10⁵ s⁻¹).
+  // The threshold is our choice, far below any run that is meant to reach steady state.
+  if (Math.abs(last[tally]! - states[k0]![tally]!) / catalystTotal < MIN_TURNOVERS) {
+    simulation.findings.push(notSteady(slope, endRate, t1));
+    return;
+  }
   if (Math.abs(slope - endRate) <= STEADY_AGREEMENT * Math.max(Math.abs(slope), Math.abs(endRate)) + floor) {
     simulation.steadyStateTof = slope;
   } else {

@@ -31,6 +31,13 @@ describe('simulate: steady-state TOF of catalytic cycles', () => {
     expect(run.simulation.concentrations.at(-1)![3]! / 0.9669265551).toBeCloseTo(1, 7);
   });
 
+  it('reads no TOF from a run too short for any turnover to register (10⁻¹⁵ s), and says so', () => {
+    const run = simulate(cycleNetwork(cycleA), { I1: 1 }, { until: 1e-15 });
+    if (!run.ok) throw new Error('simulation failed');
+    expect(run.simulation.steadyStateTof).toBeUndefined();
+    expect(run.simulation.findings.map((f) => f.code)).toContain('microkinetics-not-steady');
+  });
+
   it('gives no TOF, but a finding, before the cycle settles', () => {
     const run = simulate(cycleNetwork(cycleA), { I1: 1 }, { until: 10 });
     if (!run.ok) throw new Error('run failed');

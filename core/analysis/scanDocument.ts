@@ -46,7 +46,7 @@ function approximationOf(doc: Document, pathwayIndex: number): string {
  * are resolved anew at each temperature, so their entropy terms follow T; typed values are
  * held, which is the usual approximation and is stated.
  */
-export function scanDocument(doc: Document, startK: number, endK: number, count: number): DocumentScan {
+export function scanDocument(doc: Document, startK: number, endK: number, count: number, onProgress?: (done: number, total: number) => void): DocumentScan {
   const temperaturesK = spaced({ startK, endK, count });
   const byName = new Map<string, ScanSeries>();
   const put = (about: Omit<ScanSeries, 'values'>, k: number, value: number | null) => {
@@ -56,6 +56,7 @@ export function scanDocument(doc: Document, startK: number, endK: number, count:
   };
   temperaturesK.forEach((t, k) => {
     const analysis = analyseDocument({ ...doc, settings: { ...doc.settings, temperatureK: t } });
+    onProgress?.(k + 1, count);
     for (const p of analysis.pathways) {
       const pathway = p.pathway.id;
       for (const s of p.steps) {

@@ -12,3 +12,13 @@ export function noteLargeWork(command: string, doc: Document, io: CliIo): void {
     io.err(`passline ${command}: ${points} points (more than the usual ${BOUNDS.pointCount.usual[1]}); this may take a while…\n`);
   }
 }
+
+/**
+ * For a document beyond the usual number of points, a reporter that writes "done/total"
+ * progress lines on stderr as long work advances; undefined for ordinary documents.
+ */
+export function largeWorkProgress(command: string, doc: Document, io: CliIo, what: string): ((done: number, total: number) => void) | undefined {
+  const points = doc.pathways.reduce((n, p) => n + p.points.length, 0);
+  if (points <= BOUNDS.pointCount.usual[1]) return undefined;
+  return (done, total) => io.err(`passline ${command}: ${done}/${total} ${what}\n`);
+}

@@ -161,5 +161,7 @@ describe('large documents', () => {
     const r = await run(['scan', 'big.passline', '--count', '2'], { 'big.passline': big });
     expect(r.code).toBe(0);
     expect(r.err).toContain('passline scan: 601 points (more than the usual 500); this may take a while…');
+    // and reports its progress as it goes, one line per temperature done
+    expect(r.err).toContain('passline scan: 1/2 temperatures\npassline scan: 2/2 temperatures\n');
   }, 60_000);
 });

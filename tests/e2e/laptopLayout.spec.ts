@@ -14,7 +14,8 @@ for (const [width, height] of [[1280, 800], [1920, 1080]] as const) {
   test(`at ${width} × ${height} nothing scrolls sideways and the figure stays in view`, async ({ page }) => {
     await openEditor(page);
     await page.setViewportSize({ width, height });
-    expect(await sidewaysScrollers(page)).toEqual([]);
+    // The figure re-fits its width after a resize on the next frames: wait for the layout to settle.
+    await expect.poll(() => sidewaysScrollers(page), { timeout: 15_000 }).toEqual([]);
     const figure = page.getByRole('group', { name: 'Levels of the figure' });
     // The last point of the last pathway: its actions are inside the window, the figure still shown.
     const last = page.getByRole('region', { name: 'Pathway LA cycle' }).getByRole('button', { name: /^Delete / }).last();
@@ -29,7 +30,7 @@ for (const [width, height] of [[1280, 800], [1920, 1080]] as const) {
     await expect(page.getByRole('tab', { name: 'Species (2)' })).toBeVisible();
     await page.getByRole('button', { name: /^Conformers of LA/ }).click();
     await expect(page.getByRole('textbox', { name: 'E, conformer 1 of LA' })).toBeVisible();
-    expect(await sidewaysScrollers(page)).toEqual([]);
+    await expect.poll(() => sidewaysScrollers(page), { timeout: 15_000 }).toEqual([]);
     await page.screenshot({ path: `test-results/layout-species-${width}x${height}.png` });
   });
 }

@@ -1,14 +1,17 @@
 import { BOUNDS } from '../model/bounds.ts';
 import type { Document } from '../model/schema.ts';
 import type { CliIo } from './io.ts';
+import { expectLongWork } from './compilerTier.ts';
 
 /**
  * Says on stderr, before the work starts, that a document beyond the usual number of points
- * will take a while (up to the hard limit it still runs; see BOUNDS.pointCount).
+ * will take a while (up to the hard limit it still runs; see BOUNDS.pointCount), and lets
+ * V8 optimise for it (compilerTier.ts).
  */
 export function noteLargeWork(command: string, doc: Document, io: CliIo): void {
   const points = doc.pathways.reduce((n, p) => n + p.points.length, 0);
   if (points > BOUNDS.pointCount.usual[1]) {
+    expectLongWork();
     io.err(`passline ${command}: ${points} points (more than the usual ${BOUNDS.pointCount.usual[1]}); this may take a while…\n`);
   }
 }

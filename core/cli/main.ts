@@ -3,6 +3,7 @@ import { readFileSync } from 'node:fs';
 import { CliError, EXIT_OK, EXIT_USAGE, type CliIo } from './io.ts';
 import { commandHelp, HELP, VERSION } from './help.ts';
 import { attachNegativeValues } from './negativeValues.ts';
+import { expectLongWork } from './compilerTier.ts';
 import { readUtf8, terminalWriter } from './terminal.ts';
 
 /** The real terminal and filesystem. */
@@ -17,14 +18,16 @@ export const nodeIo: CliIo = {
 
 type Command = (positionals: string[], values: Record<string, string | boolean | string[] | undefined>, io: CliIo) => void | Promise<void>;
 type OptionSpec = { type: 'string' | 'boolean'; multiple?: boolean; short?: string };
+type Values = Record<string, string | boolean | string[] | undefined>;
 
 /**
  * One entry per command: its options, how many file arguments it takes ('many' = one or
  * more) and a `run` that imports the command's module only when that command runs, so
  * `passline --version` or `analyze` never load the PDF writer, the rasteriser or the solver.
- * Its help text is the entry of the same name in COMMAND_HELP (help.ts).
+ * Its help text is the entry of the same name in COMMAND_HELP (help.ts). `long` says when a
+ * run computes for long enough to want V8's optimising compiler (compilerTier.ts).
  */
-const COMMANDS: Record<string, { options: Record<string, OptionSpec>; run: Command; args: number | 'many' }> = {
+const COMMANDS: Record<string, { options: Record<string, OptionSpec>; run: Command; args: number | 'many'; long?: (files: string[], values: Values) => boolean }> = {
   species: {
     options: { json: { type: 'boolean' }, temperature: { type: 'string' }, 'quasi-harmonic': { type: 'string' }, cutoff: { type: 'string' } },
     args: 'many',
@@ -33,6 +36,7 @@ const COMMANDS: Record<string, { options: Record<string, OptionSpec>; run: Comma
   analyze: {
     options: { json: { type: 'boolean' }, unit: { type: 'string' }, temperature: { type: 'string' }, strict: { type: 'boolean' }, uncertainty: { type: 'string' }, seed: { type: 'string' } },
     args: 1,
+    long: (_, v) => v.uncertainty !== undefined,
     run: async ([file], v, io) => (await import('./analyze.ts')).runAnalyze(file!, { json: v.json as boolean | undefined, unit: v.unit as string | undefined, temperature: v.temperature as string | undefined, strict: v.strict as boolean | undefined, uncertainty: v.uncertainty as string | undefined, seed: v.seed as string | undefined }, io),
   },
   thermo: {
@@ -43,16 +47,19 @@ const COMMANDS: Record<string, { options: Record<string, OptionSpec>; run: Comma
   simulate: {
     options: { species: { type: 'boolean' }, until: { type: 'string' }, points: { type: 'string' }, init: { type: 'string', multiple: true }, pathway: { type: 'string' }, temperature: { type: 'string' } },
     args: 1,
+    long: () => true,
     run: async ([file], v, io) => (await import('./simulate.ts')).runSimulate(file!, { species: v.species as boolean | undefined, until: v.until as string | undefined, points: v.points as string | undefined, init: v.init as string[] | undefined, pathway: v.pathway as string | undefined, temperature: v.temperature as string | undefined }, io),
   },
   render: {
     options: { output: { type: 'string', short: 'o' }, 'out-dir': { type: 'string' }, format: { type: 'string' }, watch: { type: 'boolean' }, 'width-mm': { type: 'string' }, preset: { type: 'string' }, theme: { type: 'string' }, dpi: { type: 'string' }, unit: { type: 'string' }, temperature: { type: 'string' }, strict: { type: 'boolean' } },
     args: 'many',
+    long: (files, v) => files.length > 2 || v.watch === true,
     run: async (files, v, io) => (await import('./renderCommand.ts')).runRenderCommand(files, { outDir: v['out-dir'] as string | undefined, format: v.format as string | undefined, watch: v.watch as boolean | undefined }, { output: v.output as string | undefined, widthMm: v['width-mm'] as string | undefined, preset: v.preset as string | undefined, theme: v.theme as string | undefined, dpi: v.dpi as string | undefined, unit: v.unit as string | undefined, temperature: v.temperature as string | undefined, strict: v.strict as boolean | undefined }, io),
   },
   scan: {
     options: { from: { type: 'string' }, to: { type: 'string' }, count: { type: 'string' } },
     args: 1,
+    long: () => true,
     run: async ([file], v, io) => (await import('./scan.ts')).runScan(file!, { from: v.from as string | undefined, to: v.to as string | undefined, count: v.count as string | undefined }, io),
   },
   report: {
@@ -100,6 +107,7 @@ export async function main(argv: string[], io: CliIo = nodeIo): Promise<number> 
       const wanted = command.args === 'many' ? 'one or more file arguments' : `${command.args} file argument${command.args === 1 ? '' : 's'}`;
       throw new CliError(`${name}: expected ${wanted}, got ${count} (try passline ${name} --help)`, EXIT_USAGE);
     }
+    if (command.long?.(parsed.positionals, parsed.values)) expectLongWork();
     await command.run(parsed.positionals, parsed.values, io);
     return EXIT_OK;
   } catch (error) {

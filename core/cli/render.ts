@@ -4,13 +4,12 @@ import { pointDepictions } from '../structure/pointDepictions.ts';
 import { withStructureFormulas } from '../structure/withStructureFormulas.ts';
 import { documentStructures } from './documentStructures.ts';
 import { renderFigure } from '../export/renderFigure.node.ts';
-import { analyseUncertainty } from '../uncertainty/uncertaintyRun.ts';
-import { errorBarRanges } from '../uncertainty/errorBarRanges.ts';
 import { checkRenderOptions, type FigureFormat } from '../export/renderFigure.ts';
 import { readFontMetrics } from '../figure/font/fontMetrics.ts';
-import { layoutFigure } from '../figure/layoutFigure.ts';
+import type { Scene } from '../figure/scene.ts';
 import { omittedLabelsMessage } from '../figure/omittedLabelsMessage.ts';
 import type { Preset } from '../figure/presets.ts';
+import type { Document } from '../model/schema.ts';
 import type { ThemeName } from '../figure/themes.ts';
 import { CliError, EXIT_USAGE, type CliIo } from './io.ts';
 import { loadInput } from './loadInput.ts';
@@ -19,6 +18,7 @@ import { readBundledFont } from './fontFile.ts';
 import { writeOutput } from './writeOutput.ts';
 import { documentFindings } from './documentFindings.ts';
 import { noteLargeWork } from './largeWork.ts';
+import { expectLongWork } from './compilerTier.ts';
 import { missingGlyphs, missingGlyphsMessage } from '../export/missingGlyphs.ts';
 
 export interface RenderCliOptions {
@@ -74,13 +74,21 @@ export async function runRender(file: string, options: RenderCliOptions, io: Cli
   const layout = { ...(preset ? { preset } : {}), ...(theme ? { theme } : {}), ...(widthMm !== undefined ? { widthMm } : {}), ...(structures ? { structures: pointDepictions(doc, structures) } : {}) };
   // Error bars set in the document's figure settings come from a Monte Carlo run (its samples and seed).
   const bars = doc.figure.errorBars;
-  const errorBars = bars ? errorBarRanges(analyseUncertainty(doc), bars) : undefined;
-  const data = await renderFigure(profile, doc, { format, fontBytes, ...layout, ...(dpi !== undefined ? { dpi } : {}), ...(errorBars ? { errorBars } : {}) });
+  const errorBars = bars ? await monteCarloErrorBars(doc, bars) : undefined;
+  let omitted: Scene['omittedLabels'] = [];
+  const onScene = (scene: Scene) => { omitted = scene.omittedLabels; };
+  const data = await renderFigure(profile, doc, { format, fontBytes, metrics, onScene, ...layout, ...(dpi !== undefined ? { dpi } : {}), ...(errorBars ? { errorBars } : {}) });
   await writeOutput(options.output, data, io);
-  // renderFigure keeps its scene to itself; laying out again costs milliseconds.
-  const warning = omittedLabelsMessage(layoutFigure(profile, doc, { metrics, ...layout }).omittedLabels);
+  const warning = omittedLabelsMessage(omitted);
   if (warning) io.err(`passline render: warning: ${warning}\n`);
   for (const f of findings) io.err(`passline render: ${f.severity}: ${f.message}\n`);
   const glyphs = format === 'svg' ? null : missingGlyphsMessage(missingGlyphs(doc, metrics), metrics.family, format.toUpperCase());
   if (glyphs) io.err(`passline render: warning: ${glyphs}\n`);
+}
+
+/** The error bars of the document's Monte Carlo run; its modules load only when bars are asked for. */
+async function monteCarloErrorBars(doc: Document, bars: NonNullable<Document['figure']['errorBars']>) {
+  expectLongWork();
+  const [{ analyseUncertainty }, { errorBarRanges }] = await Promise.all([import('../uncertainty/uncertaintyRun.ts'), import('../uncertainty/errorBarRanges.ts')]);
+  return errorBarRanges(analyseUncertainty(doc), bars);
 }

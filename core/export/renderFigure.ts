@@ -1,4 +1,4 @@
-import { readFontMetrics } from '../figure/font/fontMetrics.ts';
+import { readFontMetrics, type FontMetrics } from '../figure/font/fontMetrics.ts';
 import { addErrorBars, type ErrorBarRanges } from '../figure/errorBars.ts';
 import { layoutFigure } from '../figure/layoutFigure.ts';
 import type { Preset } from '../figure/presets.ts';
@@ -6,6 +6,7 @@ import type { ThemeName } from '../figure/themes.ts';
 import { outsideHard } from '../model/bounds.ts';
 import type { Document } from '../model/schema.ts';
 import type { ResolvedProfile } from '../profile/types.ts';
+import type { Scene } from '../figure/scene.ts';
 import type { PointDrawing } from '../structure/pointDepictions.ts';
 import type { FontSubsetter } from './sceneToPdf.ts';
 import { sceneToSvg } from './sceneToSvg.ts';
@@ -35,6 +36,10 @@ export interface RenderOptions {
   structures?: ReadonlyMap<string, PointDrawing>;
   /** Error bars on the levels (core/figure/errorBars.ts), e.g. from core/uncertainty's errorBarRanges. */
   errorBars?: ErrorBarRanges;
+  /** The metrics of `fontBytes`, when the caller has already read them (spares a second parse). */
+  metrics?: FontMetrics;
+  /** Called with the laid-out scene before it is written (e.g. to report omitted labels). */
+  onScene?: (scene: Scene) => void;
 }
 
 /** Largest and smallest accepted values (our limits: beyond them files get silly). */
@@ -57,7 +62,7 @@ export function checkRenderOptions(options: Pick<RenderOptions, 'dpi' | 'widthMm
 export async function renderFigure(profile: ResolvedProfile, doc: Document, options: RenderOptions): Promise<Uint8Array | string> {
   const problem = checkRenderOptions(options);
   if (problem) throw new RangeError(`renderFigure: ${problem}`);
-  const metrics = readFontMetrics(options.fontBytes);
+  const metrics = options.metrics ?? readFontMetrics(options.fontBytes);
   const laidOut = layoutFigure(profile, doc, {
     metrics,
     ...(options.preset ? { preset: options.preset } : {}),
@@ -68,6 +73,7 @@ export async function renderFigure(profile: ResolvedProfile, doc: Document, opti
     ...(options.structures ? { structures: options.structures } : {}),
   });
   const scene = options.errorBars ? addErrorBars(laidOut, profile, options.errorBars) : laidOut;
+  options.onScene?.(scene);
   if (options.format === 'pdf') {
     // Loaded on demand: jsPDF is most of the code an SVG or PNG export would otherwise load.
     const { sceneToPdf } = await import('./sceneToPdf.ts');

@@ -1,4 +1,5 @@
-import { z } from 'zod';
+import './zodSetup.ts';
+import * as z from 'zod';
 import { convertEnergy, type EnergyUnit } from '../units/energy.ts';
 import { describe } from './describe.ts';
 import { BOUNDS, formatLimit, outsideHard, type BoundName } from './bounds.ts';

@@ -1,4 +1,5 @@
-import { z } from 'zod';
+import './zodSetup.ts';
+import * as z from 'zod';
 import { ENERGY_UNITS } from '../units/energy.ts';
 import { bounded, boundedInt, boundedText, checkEnergyField } from './bounded.ts';
 import { BOUNDS, outsideHard } from './bounds.ts';

@@ -6,17 +6,22 @@
  * handler and, separately, from the event's timestamp (which adds the browser's wait to
  * deliver the move at the next frame), with the floor of the measure (a frame wait with no
  * work) and the main-thread work per move beside them; and the time from load to an
- * interactive canvas (target < 2 s). Prints numbers; not a test.
+ * interactive canvas: the demo (issue 15 target < 1.5 s; median of fresh loads, each in its
+ * own browser context so nothing is cached) and the 10 × 50 document (target < 2 s). Prints
+ * numbers; not a test.
  */
-import { chromium } from '@playwright/test';
+import { chromium, type Browser } from '@playwright/test';
 import { spawn } from 'node:child_process';
-import { existsSync } from 'node:fs';
+import { existsSync, readFileSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { crowdedDocumentText } from '../fixtures/crowdedDocument.ts';
 
 // PASSLINE_BENCH_PORT lets two checkouts run the benchmark side by side.
 const PORT = Number(process.env.PASSLINE_BENCH_PORT ?? 4176);
 const URL_ = `http://127.0.0.1:${PORT}/`;
 
+const DEMO_LOADS = 7;
 const quantile = (xs: number[], q: number) => { const s = [...xs].sort((a, b) => a - b); return s[Math.min(s.length - 1, Math.floor(q * s.length))] ?? NaN; };
 
 async function waitForServer(): Promise<void> {
@@ -25,6 +30,28 @@ async function waitForServer(): Promise<void> {
     await new Promise((r) => setTimeout(r, 100));
   }
   throw new Error(`vite preview did not answer on ${URL_}`);
+}
+
+/**
+ * The CPU time the renderer's main thread spends from navigation to an interactive demo, from
+ * a Chromium trace (thread time of its top-level tasks): unlike wall time it does not grow
+ * while other processes hold the machine's cores.
+ */
+async function tracedLoadCpu(browser: Browser): Promise<number> {
+  const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+  const page = await context.newPage();
+  const path = join(tmpdir(), `passline-load-trace-${process.pid}.json`);
+  await browser.startTracing(page, { path, categories: ['devtools.timeline', 'disabled-by-default-devtools.timeline', 'toplevel'] });
+  await page.goto(URL_);
+  await page.getByRole('group', { name: 'Levels of the figure' }).getByRole('button').first().waitFor();
+  await browser.stopTracing();
+  await context.close();
+  type TraceEvent = { name: string; ph: string; pid: number; tid: number; tdur?: number; args?: { name?: string } };
+  const events = (JSON.parse(readFileSync(path, 'utf8')) as { traceEvents: TraceEvent[] }).traceEvents;
+  rmSync(path, { force: true });
+  const main = events.find((e) => e.name === 'thread_name' && e.args?.name === 'CrRendererMain');
+  if (!main) return NaN;
+  return events.filter((e) => e.ph === 'X' && e.name === 'RunTask' && e.pid === main.pid && e.tid === main.tid).reduce((sum, e) => sum + (e.tdur ?? 0) / 1000, 0);
 }
 
 async function main(): Promise<void> {
@@ -36,11 +63,20 @@ async function main(): Promise<void> {
       executablePath: existsSync('/usr/bin/chromium') ? '/usr/bin/chromium' : undefined,
       args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run'],
     });
+    const demoLoads: number[] = [];
+    for (let i = 0; i < DEMO_LOADS; i++) {
+      const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+      const fresh = await context.newPage();
+      const start = Date.now();
+      await fresh.goto(URL_);
+      await fresh.getByRole('group', { name: 'Levels of the figure' }).getByRole('button').first().waitFor();
+      demoLoads.push(Date.now() - start);
+      await context.close();
+    }
+    const demoCpu = await tracedLoadCpu(browser);
     const page = await browser.newPage({ viewport: { width: 1600, height: 1000 } });
-    const start = Date.now();
     await page.goto(URL_);
     await page.getByRole('group', { name: 'Levels of the figure' }).getByRole('button').first().waitFor();
-    const demoReady = Date.now() - start;
 
     // Open the big document the way a user drops a file, and time until its 500 levels can be picked.
     const text = crowdedDocumentText();
@@ -89,7 +125,8 @@ async function main(): Promise<void> {
     await browser.close();
 
     console.log('Editor benchmark (headless Chromium, 10 pathways × 50 points)');
-    console.log(`  load to interactive canvas (demo):              ${demoReady} ms`);
+    console.log(`  load to interactive canvas (demo), ${DEMO_LOADS} fresh loads: median ${quantile(demoLoads, 0.5)} ms, fastest ${Math.min(...demoLoads)} ms   (target < 1500 ms)`);
+    console.log(`  the same, renderer main-thread CPU of one load (trace): ${demoCpu.toFixed(0)} ms   (wall on a loaded machine waits for the CPU; this does not)`);
     console.log(`  open 10×50 document to interactive canvas:      ${openMs.toFixed(0)} ms   (target < 2000 ms)`);
     console.log(`  drag frames measured:                           ${frames.length}`);
     console.log(`  pointer move → painted frame, median:           ${quantile(frames, 0.5).toFixed(1)} ms`);

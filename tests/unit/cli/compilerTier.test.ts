@@ -1,0 +1,21 @@
+import { describe, expect, it } from 'vitest';
+import { spawnSync } from 'node:child_process';
+import { BIN, ROOT } from './cliBin.ts';
+
+// V8's --trace-opt prints a "completed optimizing" line for every function TurboFan compiles,
+// so it shows whether the bundle left the optimising compiler off (core/cli/compilerTier.ts).
+function turbofanCompiles(args: readonly string[]): number {
+  const run = spawnSync(process.execPath, ['--trace-opt', BIN, ...args], { cwd: ROOT, encoding: 'utf8', timeout: 60_000 });
+  expect(run.status).toBe(0);
+  return (run.stdout.match(/completed optimizing/g) ?? []).length;
+}
+
+describe('the bundled CLI and V8 optimising compiler', { timeout: 60_000 }, () => { // real processes on a shared machine
+  it('a short run (analyze of a small table) compiles nothing with TurboFan', () => {
+    expect(turbofanCompiles(['analyze', 'tests/bench/smallProfile.csv', '--json'])).toBe(0);
+  });
+
+  it('a Monte Carlo run (analyze --uncertainty) turns it back on, so its hot loop is optimised', () => {
+    expect(turbofanCompiles(['analyze', 'tests/bench/smallProfile.csv', '--uncertainty', '3000', '--json'])).toBeGreaterThan(0);
+  });
+});

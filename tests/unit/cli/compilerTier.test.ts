@@ -1,5 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { spawnSync } from 'node:child_process';
+import { mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { BIN, ROOT } from './cliBin.ts';
 
 // V8's --trace-opt prints a "completed optimizing" line for every function TurboFan compiles,
@@ -11,7 +14,9 @@ function turbofanCompiles(args: readonly string[]): number {
 }
 
 describe('the bundled CLI and V8 optimising compiler', { timeout: 60_000 }, () => { // real processes on a shared machine
-  it('a short run (analyze of a small table) compiles nothing with TurboFan', () => {
+  it('a short run (a small table drawn to PDF, ~20 TurboFan compiles without the switch) compiles nothing with TurboFan', () => {
+    const out = join(mkdtempSync(join(tmpdir(), 'passline-tier-')), 'fig.pdf');
+    expect(turbofanCompiles(['render', 'tests/bench/smallProfile.csv', '-o', out])).toBe(0);
     expect(turbofanCompiles(['analyze', 'tests/bench/smallProfile.csv', '--json'])).toBe(0);
   });
 

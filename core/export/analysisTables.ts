@@ -139,7 +139,7 @@ export function analysisSpecs(report: AnalysisReport, decimals: number): Analysi
         { title: 'product shares, median [95 % interval] / %', cell: sharesWithIntervals, uncertainOnly: true },
         {
           title: 'ee / %', cell: (c) => (c.type === 'rate' || c.ee === null ? null : round(100 * c.ee, 1)),
-          interval: { name: 'ee', unit: '%', holder: (c) => (c.type === 'rate' ? null : c), field: 'ee', show: (v) => round(100 * v, 1) },
+          interval: { name: 'ee toward the major product', unit: '%', holder: (c) => (c.type === 'rate' ? null : c), field: 'ee', show: (v) => round(100 * v, 1) },
         },
       ],
     },

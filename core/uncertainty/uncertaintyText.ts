@@ -50,7 +50,7 @@ export function uncertaintyText(report: UncertainReport, decimals = 1): string {
     if (c.type === 'rate') lines.push(`  ${c.candidate} vs ${c.baseline}: ΔΔG‡ ${interval(h, 'ddG', e)} ${unit}, rate ratio ${interval(h, 'rateRatio', sci)}; P(faster): ${probabilities(h, 'faster')}`);
     else {
       const shares = c.products.map((x) => `${x.pathway} ${interval(x as Holder, 'percent', (v) => v.toFixed(1))} %`).join(', ');
-      lines.push(`  selectivity: ${shares}${c.ee === null ? '' : `; ee ${interval(h, 'ee', (v) => (100 * v).toFixed(1))} %`}; P(major): ${probabilities(h, 'major')}`);
+      lines.push(`  selectivity: ${shares}${c.ee === null ? '' : `; ee toward ${c.major} ${interval(h, 'ee', (v) => (100 * v).toFixed(1))} %`}; P(major): ${probabilities(h, 'major')}`);
     }
   }
   for (const s of u.rateSensitivity) {

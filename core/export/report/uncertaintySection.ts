@@ -15,7 +15,7 @@ const SUBSECTIONS = [
   ['comparisons', 'Comparisons'],
 ] as const;
 
-const percent = (p: number) => `${(100 * p).toFixed(1)} %`;
+const percent = (p: number) => `${(100 * p).toFixed(1)}\u00a0%`;
 
 /** What the figure's error bars show, for the line under the figure. */
 export function errorBarCaption(report: UncertainReport, mode: 'sigma' | 'interval'): string {
@@ -44,7 +44,7 @@ export function uncertaintySection(pages: ReportPages, report: UncertainReport, 
   const stated = uncertaintyStatement(u);
   pages.heading('Uncertainty');
   pages.paragraph(`${stated.run[0]!.toUpperCase()}${stated.run.slice(1)}.`);
-  pages.paragraph('Each input below was drawn independently from a normal distribution with its σ as entered, and every sample was run through the same resolution and analysis as the numbers above (propagation of distributions by Monte Carlo, JCGM 101:2008, Supplement 1 to the GUM). Quantities that no σ reaches are left out.', 0.9);
+  pages.paragraph('Each input below was drawn independently from a normal distribution with its σ as entered, and every sample was run through the same resolution and analysis as the numbers above (propagation of distributions by Monte Carlo, JCGM 101:2008, Supplement 1 to the GUM). Quantities that no σ reaches are left out; an ee is signed toward the estimate\'s major product, negative where the other enantiomer is favoured.', 0.9);
   if (u.inputs.length === 0) {
     pages.paragraph(stated.inputs);
     return;
@@ -55,7 +55,8 @@ export function uncertaintySection(pages: ReportPages, report: UncertainReport, 
     const rows = [...intervalRows(specs[key] as Parameters<typeof intervalRows>[0]) as IntervalRow[], ...(key === 'comparisons' ? shareRows(report) : [])].filter((r) => r.high !== r.low);
     if (rows.length === 0) continue;
     pages.heading(`${title}: median and 95 % interval`, 1.1);
-    pages.table(['result', 'quantity', 'estimate', 'median', '2.5 %', '97.5 %', 'unit'],
+    // No-break spaces keep "97.5 %" on one line in narrow columns.
+    pages.table(['result', 'quantity', 'estimate', 'median', '2.5\u00a0%', '97.5\u00a0%', 'unit'],
       rows.map((r) => [r.subject, r.quantity, reportCell(r.estimate), reportCell(r.median), reportCell(r.low), reportCell(r.high), r.unit]));
   }
   const grouped = new Map<string, string[]>();
@@ -71,6 +72,6 @@ export function uncertaintySection(pages: ReportPages, report: UncertainReport, 
   if (shares.length > 0) {
     pages.heading('Which inputs matter for the rate', 1.1);
     pages.paragraph(`Variance share of each input: the squared correlation of its sampled deviation with ln TOF (cycles) or the effective barrier (linear pathways); for independent inputs these add up to the share a linear model explains (Saltelli et al., Global Sensitivity Analysis: The Primer, Wiley 2008). Shares under ${percent(MIN_SHARE)} are left out.`, 0.9);
-    pages.table(['pathway', 'of', 'input', 'share of the variance'], shares);
+    pages.table(['pathway', 'of', 'input', 'variance share'], shares);
   }
 }

@@ -126,7 +126,7 @@ describe('analysis tables with a Monte Carlo run: selectivity', () => {
 
   it('gives share and ee intervals and the probability of the major product', () => {
     const ee = q(run, 'comparison 0/ee');
-    expect(column(tables.comparisons, 'ee, 2.5 % / %')).toEqual([Number((100 * ee.low).toFixed(1))]);
+    expect(column(tables.comparisons, 'ee toward the major product, 2.5 % / %')).toEqual([Number((100 * ee.low).toFixed(1))]);
     const s = q(run, 'comparison 0/S/percent');
     expect(column(tables.comparisons, 'product shares, median [95 % interval] / %')[0]).toContain(`S ${s.median.toFixed(1)} [${s.low.toFixed(1)}, ${s.high.toFixed(1)}]`);
     const major = run.choices.find((c) => c.key === 'comparison 0/major')!.probabilities;

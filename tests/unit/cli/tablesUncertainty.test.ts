@@ -1,14 +1,15 @@
 import { describe, expect, it } from 'vitest';
+import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
 import { main } from '../../../core/cli/main.ts';
 import type { CliIo } from '../../../core/cli/io.ts';
 import { ONE_BARRIER_DOC } from './oneBarrierDoc.ts';
 
 const DOC = ONE_BARRIER_DOC;
 
-async function run(argv: string[]) {
+async function run(argv: string[], doc = DOC) {
   let err = '';
   const files = new Map<string, string | Uint8Array>();
-  const io: CliIo = { out: () => {}, err: (t) => { err += t; }, readFile: () => DOC, readBytes: () => new Uint8Array(), writeFile: (path, data) => { files.set(path, data); } };
+  const io: CliIo = { out: () => {}, err: (t) => { err += t; }, readFile: () => doc, readBytes: () => new Uint8Array(), writeFile: (path, data) => { files.set(path, data); } };
   return { code: await main(argv, io), err, files };
 }
 
@@ -37,5 +38,15 @@ describe('passline tables / report --uncertainty', () => {
     expect(new TextDecoder('latin1').decode((r.files.get('r.pdf') as Uint8Array).slice(0, 5))).toBe('%PDF-');
     expect(await run(['report', 'x.passline', '-o', 'r.pdf', '--seed', '4'])).toMatchObject({ code: 2, err: expect.stringContaining('--seed needs --uncertainty') });
     expect(await run(['tables', 'x.passline', '-o', 't.md', '--uncertainty', 'lots'])).toMatchObject({ code: 2, err: expect.stringContaining('--uncertainty: expected a whole number') });
+  });
+
+  it('report draws the error bars figure.errorBars asks for, from the document\'s own samples and seed, and states them', { timeout: 30_000 }, async () => {
+    const doc = JSON.parse(DOC);
+    doc.figure = { errorBars: 'interval' };
+    doc.settings = { uncertainty: { samples: 300, seed: 12 } };
+    const pdf = (await run(['report', 'x.passline', '-o', 'r.pdf'], JSON.stringify(doc))).files.get('r.pdf') as Uint8Array;
+    const reader = await getDocument({ data: pdf.slice(), useSystemFonts: false, disableFontFace: true, verbosity: 0 }).promise;
+    const first = (await (await reader.getPage(1)).getTextContent()).items.map((i) => ('str' in i ? i.str : '')).join(' ').replace(/\s+/g, ' ');
+    expect(first).toContain('Error bars: the 95 % interval (2.5th–97.5th percentiles) of each level over N = 300 Monte Carlo samples, seed 12');
   });
 });

@@ -1,6 +1,7 @@
 import { analyseDocument } from '../analysis/analyseDocument.ts';
 import { documentStructures } from './documentStructures.ts';
-import { CliError, EXIT_USAGE, type CliIo } from './io.ts';
+import { CliError, type CliIo } from './io.ts';
+import { uncertaintyOptions, type UncertaintyCliOptions } from './uncertaintyOptions.ts';
 import { loadInput } from './loadInput.ts';
 import { applySettingOptions } from './options.ts';
 import { analysisReport } from '../report/analysisReport.ts';
@@ -10,21 +11,12 @@ import { analyseUncertainty } from '../uncertainty/uncertaintyRun.ts';
 import { annotateReport } from '../uncertainty/annotateReport.ts';
 import { uncertaintyText } from '../uncertainty/uncertaintyText.ts';
 
-export interface AnalyzeOptions {
+export interface AnalyzeOptions extends UncertaintyCliOptions {
   json?: boolean | undefined;
   unit?: string | undefined;
   temperature?: string | undefined;
   /** Exit 1 when any finding has severity error. */
   strict?: boolean | undefined;
-  /** Number of Monte Carlo samples; absent: no uncertainty run. */
-  uncertainty?: string | undefined;
-  seed?: string | undefined;
-}
-
-function integerOption(name: string, text: string, min: number, max: number): number {
-  const value = Number(text);
-  if (!Number.isInteger(value) || value < min || value > max) throw new CliError(`--${name}: expected a whole number from ${min} to ${max}, got "${text}"`, EXIT_USAGE);
-  return value;
 }
 
 /**
@@ -34,18 +26,16 @@ function integerOption(name: string, text: string, min: number, max: number): nu
  * Carlo intervals.
  */
 export async function runAnalyze(file: string, options: AnalyzeOptions, io: CliIo): Promise<void> {
-  if (options.seed !== undefined && options.uncertainty === undefined) throw new CliError('--seed needs --uncertainty N', EXIT_USAGE);
-  const samples = options.uncertainty === undefined ? undefined : integerOption('uncertainty', options.uncertainty, 10, 1_000_000);
-  const seed = options.seed === undefined ? undefined : integerOption('seed', options.seed, 0, 4_294_967_295);
+  const run = uncertaintyOptions(options);
   const doc = applySettingOptions(loadInput(file, io), options);
   const analysis = analyseDocument(doc, await documentStructures(doc));
   const base = analysisReport(doc, analysis);
   const report = { ...base, checks: [...base.checks, ...documentFindings(doc, analysis.profile)] };
   const summary = `findings: ${findingCounts(report.checks)}`;
-  if (samples === undefined) {
+  if (run === undefined) {
     io.out(options.json ? `${JSON.stringify(report, null, 2)}\n` : `${analysisText(report)}\n${summary}\n`);
   } else {
-    const annotated = annotateReport(report, analyseUncertainty(doc, { samples, seed }));
+    const annotated = annotateReport(report, analyseUncertainty(doc, run));
     io.out(options.json ? `${JSON.stringify(annotated, null, 2)}\n` : `${analysisText(report)}${uncertaintyText(annotated)}\n${summary}\n`);
   }
   const errors = report.checks.filter((f) => f.severity === 'error').length;

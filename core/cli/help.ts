@@ -47,12 +47,20 @@ export const COMMAND_HELP: Record<string, string> = {
                        (Ctrl+C to stop); each output is replaced in one step
       --strict         exit 1 (and write nothing) when a finding has severity error
 `,
-  report: `  passline report FILE -o OUT.pdf [--unit U] [--temperature K]
+  report: `  passline report FILE -o OUT.pdf [--unit U] [--temperature K] [--uncertainty N [--seed S]]
       A PDF report: the figure, energies with provenance, steps, effective barriers,
       energetic span, comparisons, settings, methods with sources, findings, cautions.
+      --uncertainty N  add a Monte Carlo section (as analyze): N, seed and every σ,
+                       median and 95 % interval of each number, probabilities, and
+                       which inputs matter for the rate; figure.errorBars in the
+                       document also draws error bars (its samples and seed)
+      --seed S         seed of the generator (default: the document's, else 1)
 `,
-  tables: `  passline tables FILE -o OUT.csv|OUT.md [--unit U] [--temperature K]
+  tables: `  passline tables FILE -o OUT.csv|OUT.md [--unit U] [--temperature K] [--uncertainty N [--seed S]]
       The points and the analysis as CSV or Markdown tables, units in every header.
+      --uncertainty N  add median, 2.5 % and 97.5 % columns beside each number, the
+                       run's N, seed and input σ, and the probabilities (as analyze)
+      --seed S         seed of the generator (default: the document's, else 1)
 `,
   scan: `  passline scan FILE [--from K] [--to K] [--count N]
       Rate constants, equilibrium constants, TOFs and product shares over a temperature

@@ -63,14 +63,14 @@ const COMMANDS: Record<string, { options: Record<string, OptionSpec>; run: Comma
     run: async ([file], v, io) => (await import('./scan.ts')).runScan(file!, { from: v.from as string | undefined, to: v.to as string | undefined, count: v.count as string | undefined }, io),
   },
   report: {
-    options: { output: { type: 'string', short: 'o' }, unit: { type: 'string' }, temperature: { type: 'string' } },
+    options: { output: { type: 'string', short: 'o' }, unit: { type: 'string' }, temperature: { type: 'string' }, uncertainty: { type: 'string' }, seed: { type: 'string' } },
     args: 1,
-    run: async ([file], v, io) => (await import('./report.ts')).runReport(file!, { output: v.output as string | undefined, unit: v.unit as string | undefined, temperature: v.temperature as string | undefined }, io),
+    run: async ([file], v, io) => (await import('./report.ts')).runReport(file!, { output: v.output as string | undefined, unit: v.unit as string | undefined, temperature: v.temperature as string | undefined, uncertainty: v.uncertainty as string | undefined, seed: v.seed as string | undefined }, io),
   },
   tables: {
-    options: { output: { type: 'string', short: 'o' }, unit: { type: 'string' }, temperature: { type: 'string' } },
+    options: { output: { type: 'string', short: 'o' }, unit: { type: 'string' }, temperature: { type: 'string' }, uncertainty: { type: 'string' }, seed: { type: 'string' } },
     args: 1,
-    run: async ([file], v, io) => (await import('./report.ts')).runTables(file!, { output: v.output as string | undefined, unit: v.unit as string | undefined, temperature: v.temperature as string | undefined }, io),
+    run: async ([file], v, io) => (await import('./report.ts')).runTables(file!, { output: v.output as string | undefined, unit: v.unit as string | undefined, temperature: v.temperature as string | undefined, uncertainty: v.uncertainty as string | undefined, seed: v.seed as string | undefined }, io),
   },
 };
 

@@ -16,6 +16,10 @@ import type { FontSubsetter } from './sceneToPdf.ts';
 import { sceneText } from './sceneText.ts';
 import { toBase64 } from './toBase64.ts';
 import { safeText } from '../format/safeText.ts';
+import { addErrorBars } from '../figure/errorBars.ts';
+import { annotateReport } from '../uncertainty/annotateReport.ts';
+import { errorBarRanges } from '../uncertainty/errorBarRanges.ts';
+import type { UncertaintyResult } from '../uncertainty/uncertaintyRun.ts';
 
 /** Report choices; the figure follows the document's settings unless overridden. */
 export interface ReportOptions {
@@ -26,26 +30,34 @@ export interface ReportOptions {
   preset?: Preset;
   theme?: ThemeName;
   autoSubscript?: boolean;
+  /**
+   * A finished Monte Carlo run of this document (core/uncertainty): adds the uncertainty
+   * section, and the figure's error bars when `doc.figure.errorBars` asks for them.
+   */
+  uncertainty?: UncertaintyResult | undefined;
 }
 
 /**
  * A multi-page A4 PDF report of a document: the figure (vector, the same scene as every
  * export) on page 1, then settings, energies with provenance, steps, effective barriers,
- * energetic span results, comparisons, methods with their sources, findings and the
- * safety caution. Text wraps within the page and tables break across pages. Pure: the
+ * energetic span results, comparisons, the Monte Carlo intervals when a run is given,
+ * methods with their sources, findings and the safety caution. Text wraps within the page and tables break across pages. Pure: the
  * caller supplies the font (and, in Node, a subsetter; see renderReport.node.ts).
  */
 export async function renderReport(doc: Document, options: ReportOptions): Promise<Uint8Array> {
   const metrics = readFontMetrics(options.fontBytes);
   const analysis = analyseDocument(doc);
   const report = analysisReport(doc, analysis);
-  const scene = layoutFigure(analysis.profile, doc, {
+  const laidOut = layoutFigure(analysis.profile, doc, {
     metrics, preset: options.preset ?? 'double', widthMm: A4.widthMm - 2 * A4.marginMm,
     ...(options.theme ? { theme: options.theme } : {}),
     ...(options.autoSubscript !== undefined ? { autoSubscript: options.autoSubscript } : {}),
   });
+  const run = options.uncertainty;
+  const bars = run && doc.figure.errorBars ? errorBarRanges(run, doc.figure.errorBars) : undefined;
+  const scene = bars ? addErrorBars(laidOut, analysis.profile, bars) : laidOut;
   const pages = new ReportPages(metrics);
-  reportContent(pages, doc, analysis, report, scene);
+  reportContent(pages, doc, analysis, report, scene, run && annotateReport(report, run));
   const font = options.subsetFont ? await options.subsetFont(options.fontBytes, usedText(pages.pages, sceneText(scene))) : options.fontBytes;
   const pdf = new jsPDF({ unit: 'mm', format: 'a4', orientation: 'portrait', compress: true, putOnlyUsedFonts: true });
   pdf.addFileToVFS('report-font.ttf', toBase64(font));

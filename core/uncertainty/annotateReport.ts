@@ -36,7 +36,8 @@ function objectAt(root: unknown, path: readonly (string | number)[]): Record<str
 /**
  * The analysis report with the Monte Carlo results beside each quantity: every object that
  * holds a sampled number gets an `uncertainty` object with `{ median, low, high }` under the
- * number's field name (energies in the report's unit, rates and ratios as numbers), and
+ * number's field name (energies in the report's unit, rates and ratios as numbers; an ee
+ * signed toward the point estimate's major product, negative where the other wins), and
  * `<field>Probability` maps for categorical results (TDTS, TDI, faster pathway, major
  * product). The top-level `uncertainty` states N, the seed and every input σ.
  */

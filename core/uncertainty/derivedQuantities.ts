@@ -87,7 +87,10 @@ export function derivedQuantities(a0: DocumentAnalysis): { quantities: DerivedQu
         q(`comparison ${ci}/ddG`, path, 'ddG', 'energy', (a) => r(a)?.pair?.ddgJ ?? null);
         q(`comparison ${ci}/ratio`, path, 'ratio', 'log', (a) => logOf(r(a)?.pair?.ratio));
         q(`comparison ${ci}/er`, path, 'er', 'log', (a) => logOf(r(a)?.pair?.er));
-        if (c.enantiomeric) q(`comparison ${ci}/ee`, path, 'ee', 'plain', (a) => r(a)?.pair?.ee ?? null);
+        // ee is unsigned (|tanh(ΔΔG‡/2RT)|): sampled unsigned, a run where the other enantiomer wins would
+        // count as high ee. Signed toward the point estimate's major product, its percentiles are those of ΔΔG‡ mapped by tanh.
+        const major0 = c.result.pair.major;
+        if (c.enantiomeric) q(`comparison ${ci}/ee`, path, 'ee', 'plain', (a) => { const p = r(a)?.pair; return p ? (p.major === major0 ? p.ee : -p.ee) : null; });
       }
       choices.push({ key: `comparison ${ci}/major`, path, field: 'major', read: (a) => { const ch = r(a)?.channels; return ch && ch.length > 0 ? ch.reduce((x, y) => (y.fraction > x.fraction ? y : x)).label : null; } });
     }

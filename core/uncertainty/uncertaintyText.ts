@@ -1,5 +1,6 @@
 import { unitLabel } from '../units/energy.ts';
 import type { UncertainReport } from './annotateReport.ts';
+import { uncertaintyStatement } from './uncertaintyStatement.ts';
 import { intervalOf, probabilitiesOf, type Holder } from './reportReaders.ts';
 
 const sci = (x: number) => x.toPrecision(3);
@@ -24,12 +25,13 @@ export function uncertaintyText(report: UncertainReport, decimals = 1): string {
   const u = report.uncertainty;
   const unit = unitLabel(report.unit);
   const e = (x: number) => x.toFixed(decimals);
-  const lines = ['', `Uncertainty: ${u.method}; N = ${u.samples} samples, seed ${u.seed}; ${u.interval}`];
+  const stated = uncertaintyStatement(u);
+  const lines = ['', `Uncertainty: ${stated.run}`];
   if (u.inputs.length === 0) {
-    lines.push('  no input carries a σ: give "sigma" beside an entered value, or a default σ in settings.uncertainty.defaultSigma');
+    lines.push(`  ${stated.inputs}`);
     return `${lines.join('\n')}\n`;
   }
-  lines.push(`  inputs (σ as entered): ${u.inputs.map((i) => `${i.input} ${i.sigma} ${unitLabel(i.unit as never)}${i.default ? ' (default)' : ''}`).join('; ')}`);
+  lines.push(`  inputs (σ as entered): ${stated.inputs}`);
   for (const p of report.pathways) {
     lines.push(`  ${p.name}`);
     lines.push(`    energies / ${unit}: ${p.points.map((q) => `${q.label} ${interval(q as Holder, 'energy', e)}`).join('; ')}`);
@@ -48,7 +50,7 @@ export function uncertaintyText(report: UncertainReport, decimals = 1): string {
     if (c.type === 'rate') lines.push(`  ${c.candidate} vs ${c.baseline}: ΔΔG‡ ${interval(h, 'ddG', e)} ${unit}, rate ratio ${interval(h, 'rateRatio', sci)}; P(faster): ${probabilities(h, 'faster')}`);
     else {
       const shares = c.products.map((x) => `${x.pathway} ${interval(x as Holder, 'percent', (v) => v.toFixed(1))} %`).join(', ');
-      lines.push(`  selectivity: ${shares}${c.ee === null ? '' : `; ee ${interval(h, 'ee', (v) => (100 * v).toFixed(1))} %`}; P(major): ${probabilities(h, 'major')}`);
+      lines.push(`  selectivity: ${shares}${c.ee === null ? '' : `; ee toward ${c.major} ${interval(h, 'ee', (v) => (100 * v).toFixed(1))} %`}; P(major): ${probabilities(h, 'major')}`);
     }
   }
   for (const s of u.rateSensitivity) {

@@ -3,6 +3,7 @@
 // intervals. The demo is an invented scenario (assets/demo/demo.passline).
 import { expect, test } from '@playwright/test';
 import { readFileSync } from 'node:fs';
+import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
 import { consoleErrors, dropFile, openEditor } from './editorHelpers.ts';
 
 const demo = JSON.parse(readFileSync(new URL('../../assets/demo/demo.passline', import.meta.url), 'utf8'));
@@ -73,4 +74,30 @@ test('looks right at 1280 × 800', async ({ page }) => {
   await page.screenshot({ path: 'test-results/uncertainty-canvas.png' });
   await panel.scrollIntoViewIfNeeded();
   await page.screenshot({ path: 'test-results/uncertainty-panel.png' });
+});
+
+test('the analysis tables and the report exports carry the finished run, with N, seed and σ', async ({ page }) => {
+  await openEditor(page);
+  await page.setViewportSize({ width: 1280, height: 800 });
+  demo.settings.uncertainty = { samples: 2000, seed: 4, defaultSigma: 1.5 };
+  await dropFile(page, JSON.stringify(demo), 'demo.passline');
+  const panel = page.getByRole('region', { name: /How sure is this/ });
+  await expect(panel.getByRole('status')).toContainText('N = 2000 samples', { timeout: 20_000 });
+  await page.getByRole('button', { name: 'Export…' }).click();
+  const dialog = page.getByRole('dialog', { name: 'Export' });
+  await dialog.getByRole('combobox', { name: 'What' }).selectOption('analysis-md');
+  await expect(dialog).toContainText('With the Monte Carlo intervals: N = 2000 samples, seed 4');
+  const preview = dialog.getByLabel('Preview');
+  await expect(preview).toContainText('N = 2000 samples, seed 4', { timeout: 20_000 });
+  await expect(preview).toContainText('1.5 kcal mol⁻¹ (default)');
+  await expect(preview).toContainText('ΔG‡ forward, 97.5 % / kcal mol⁻¹');
+  await page.screenshot({ path: 'test-results/uncertainty-export.png' });
+  await dialog.getByRole('combobox', { name: 'What' }).selectOption('report');
+  const download = page.waitForEvent('download');
+  await dialog.getByRole('button', { name: 'Save export…' }).click();
+  const pdf = await getDocument({ data: new Uint8Array(readFileSync(await (await download).path())), useSystemFonts: false, disableFontFace: true, verbosity: 0 }).promise;
+  let text = '';
+  for (let i = 1; i <= pdf.numPages; i++) text += (await (await pdf.getPage(i)).getTextContent()).items.map((t) => ('str' in t ? t.str : '')).join(' ');
+  expect(text.replace(/\s+/g, ' ')).toContain('N = 2000 samples, seed 4');
+  expect(text).toContain('Probabilities over the samples');
 });

@@ -16,12 +16,20 @@ import { tablesToCsv, tablesToMarkdown } from '../../core/export/tablesDocument.
 import { renderReport } from '../../core/export/renderReport.ts';
 import { svgToPng } from './svgToPng.ts';
 import { energyDecimals } from '../../core/format/energyDecimals.ts';
+import { annotateReport } from '../../core/uncertainty/annotateReport.ts';
+import type { UncertaintyResult } from '../../core/uncertainty/uncertaintyRun.ts';
 
 /** What can be exported from the editor. */
 export type ExportKind = 'svg' | 'pdf' | 'png' | 'report' | 'points-csv' | 'points-md' | 'analysis-csv' | 'analysis-md';
 
 /** Export choices: figure size preset, theme and PNG resolution. */
-export interface ExportChoice { kind: ExportKind; preset: Preset; theme: ThemeName; dpi: number; /** Error bars on the levels (issue 18). */ errorBars?: ErrorBarRanges | undefined }
+export interface ExportChoice {
+  kind: ExportKind; preset: Preset; theme: ThemeName; dpi: number;
+  /** Error bars on the levels (issue 18). */
+  errorBars?: ErrorBarRanges | undefined;
+  /** The document's finished Monte Carlo run: intervals in the analysis tables and the report (issue 18). */
+  uncertainty?: UncertaintyResult | undefined;
+}
 
 /** The file to hand to the host, and a preview: SVG text for figures, the text itself for tables. */
 export interface ExportFile { data: string | Uint8Array; mimeType: ExportMimeType; extension: string; preview: { svg?: string; text?: string } }
@@ -35,7 +43,10 @@ export async function buildExport(doc: Document, analysis: DocumentAnalysis, fon
     const scene = layoutFigure(analysis.profile, doc, { metrics: font.metrics, preset: choice.preset, theme: choice.theme, ...(structures ? { structures } : {}) });
     return choice.errorBars ? addErrorBars(scene, analysis.profile, choice.errorBars) : scene;
   };
-  const tables = () => analysisTables(analysisReport(doc, analysis), energyDecimals(doc.settings, doc.settings.unit));
+  const tables = () => {
+    const report = analysisReport(doc, analysis);
+    return analysisTables(choice.uncertainty ? annotateReport(report, choice.uncertainty) : report, energyDecimals(doc.settings, doc.settings.unit));
+  };
   switch (choice.kind) {
     case 'svg': { const svg = sceneToSvg(figure()); return { data: svg, mimeType: 'image/svg+xml', extension: '.svg', preview: { svg } }; }
     case 'pdf': {
@@ -53,7 +64,7 @@ export async function buildExport(doc: Document, analysis: DocumentAnalysis, fon
     }
     case 'report': {
       const svg = sceneToSvg(figure());
-      const data = render ? await renderReport(doc, { fontBytes: font.bytes, preset: choice.preset, theme: choice.theme }) : new Uint8Array();
+      const data = render ? await renderReport(doc, { fontBytes: font.bytes, preset: choice.preset, theme: choice.theme, uncertainty: choice.uncertainty }) : new Uint8Array();
       return { data, mimeType: 'application/pdf', extension: '.pdf', preview: { svg } };
     }
     case 'points-csv': { const text = tableToCsv(pointsTable(analysis.profile, energyDecimals(doc.settings, doc.settings.unit))); return { data: text, mimeType: 'text/csv', extension: '.csv', preview: { text } }; }

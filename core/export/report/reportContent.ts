@@ -9,6 +9,9 @@ import type { Table } from '../tables.ts';
 import { CAUTION, METHODS } from './methodsText.ts';
 import type { ReportPages } from './reportPages.ts';
 import { energyDecimals } from '../../format/energyDecimals.ts';
+import { reportCell } from './reportCell.ts';
+import { errorBarCaption, uncertaintySection } from './uncertaintySection.ts';
+import type { UncertainReport } from '../../uncertainty/annotateReport.ts';
 
 const STANDARD_STATES: Record<Document['settings']['standardState'], string> = {
   'as-computed': 'as computed (no correction)',
@@ -16,14 +19,19 @@ const STANDARD_STATES: Record<Document['settings']['standardState'], string> = {
   '1bar-to-1M': '1 bar → 1 mol L⁻¹ per solute species',
 };
 
-/** Writes the report's sections onto `pages`: figure, settings, tables, methods, findings, caution. */
-export function reportContent(pages: ReportPages, doc: Document, analysis: DocumentAnalysis, report: AnalysisReport, scene: Scene): void {
+/**
+ * Writes the report's sections onto `pages`: figure, settings, tables, methods, findings,
+ * caution; with `uncertain` (the report annotated with a Monte Carlo run) an uncertainty
+ * section after the comparisons, and a line under the figure when it carries error bars.
+ */
+export function reportContent(pages: ReportPages, doc: Document, analysis: DocumentAnalysis, report: AnalysisReport, scene: Scene, uncertain?: UncertainReport): void {
   const s = doc.settings;
   const unit = unitLabel(report.unit);
   const tables = analysisTables(report, energyDecimals(s, s.unit));
   pages.heading(doc.title || 'Energy profile', 1.7);
   pages.paragraph(`Passline report: Δ${report.quantity} in ${unit} at ${report.temperatureK} K.`);
   pages.figure(scene);
+  if (uncertain && doc.figure.errorBars && scene.items.some((i) => i.role === 'errorBar')) pages.paragraph(errorBarCaption(uncertain, doc.figure.errorBars), 0.9);
   pages.heading('Settings');
   pages.table(['setting', 'value'], [
     ['quantity', `Δ${s.quantity} (${{ E: 'electronic energy', H: 'enthalpy', G: 'Gibbs energy' }[s.quantity]})`],
@@ -38,6 +46,7 @@ export function reportContent(pages: ReportPages, doc: Document, analysis: Docum
   section(pages, 'Effective barriers', tables.effectiveBarriers);
   section(pages, 'Energetic span of catalytic cycles', tables.energeticSpans, report.pathways.some((p) => p.energeticSpan) ? `Convention: ${report.pathways.find((p) => p.energeticSpan)!.energeticSpan!.convention}.` : undefined);
   section(pages, 'Comparisons', tables.comparisons);
+  if (uncertain) uncertaintySection(pages, uncertain, energyDecimals(s, s.unit));
   pages.heading('Methods');
   for (const m of METHODS) pages.paragraph(m);
   const findings = analysis.findings.length === 0 ? ['No findings.']
@@ -57,7 +66,7 @@ function section(pages: ReportPages, title: string, table: Table, note?: string)
     return;
   }
   if (note) pages.paragraph(note, 0.9);
-  pages.table(table.columns, table.rows.map((r) => r.map(cell)));
+  pages.table(table.columns, table.rows.map((r) => r.map(reportCell)));
 }
 
 /** The steps table with each rate constant and its unit in one cell, so it fits a portrait page. */
@@ -77,12 +86,4 @@ function stepsForPage(report: AnalysisReport, decimals: number): Table {
 
 function sci(v: number): string {
   return formatScientific(v, 3);
-}
-
-function cell(value: string | number | null): string {
-  if (value === null) return '—';
-  if (typeof value === 'string') return value;
-  // Very large or small numbers read better as "× 10ⁿ" (4 significant digits), the app's one notation.
-  const a = Math.abs(value);
-  return a !== 0 && (a >= 1e5 || a < 1e-3) ? formatScientific(value, 4) : String(value).replace(/-/g, '\u2212');
 }

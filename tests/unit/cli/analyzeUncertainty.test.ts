@@ -1,17 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { main } from '../../../core/cli/main.ts';
 import type { CliIo } from '../../../core/cli/io.ts';
+import { ONE_BARRIER_DOC } from './oneBarrierDoc.ts';
 import { rtJoules } from '../../../core/units/thermal.ts';
 
-// Invented profile: one step, barrier 20 ± 1 kcal/mol.
-const DOC = JSON.stringify({
-  format: 'passline', version: 2, title: 'one uncertain barrier',
-  pathways: [{ id: 'a', name: 'A', points: [
-    { id: 'r', label: 'R', kind: 'min', energy: { mode: 'value', value: 0, unit: 'kcal/mol' } },
-    { id: 't', label: 'TS', kind: 'ts', energy: { mode: 'barrier', value: 20, unit: 'kcal/mol', sigma: 1 } },
-    { id: 'p', label: 'P', kind: 'min', energy: { mode: 'value', value: -5, unit: 'kcal/mol' } },
-  ] }],
-});
+const DOC = ONE_BARRIER_DOC;
 
 async function run(argv: string[]) {
   let out = '', err = '';

@@ -14,7 +14,12 @@ import type { CalcAtom } from './calcRecord.ts';
  */
 export const SAME_GEOMETRY_TOLERANCE_A = 1e-3;
 
+// Pairing compares each single point with each frequency file; each geometry's distances are computed once.
+const cache = new WeakMap<readonly CalcAtom[], Map<string, number[]>>();
+
 function distancesByPair(atoms: readonly CalcAtom[]): Map<string, number[]> {
+  const cached = cache.get(atoms);
+  if (cached) return cached;
   const byPair = new Map<string, number[]>();
   for (let i = 0; i < atoms.length; i++) {
     const a = atoms[i]!;
@@ -27,6 +32,7 @@ function distancesByPair(atoms: readonly CalcAtom[]): Map<string, number[]> {
     }
   }
   for (const list of byPair.values()) list.sort((p, q) => p - q);
+  cache.set(atoms, byPair);
   return byPair;
 }
 

@@ -4,6 +4,7 @@ export { readOrcaOutput } from './readOrcaOutput.ts';
 export { readXyz, type XyzResult } from './readXyz.ts';
 export { readCalculation, detectProgram, type CalcReading } from './readCalculation.ts';
 export { hillFormula } from './hillFormula.ts';
+export { geometryDeviation, SAME_GEOMETRY_TOLERANCE_A } from './geometryDeviation.ts';
 export { pairCalcFiles, speciesKey, type CalcFile, type CalcPair } from './pairCalcFiles.ts';
 export { speciesFromCalc, type CalcConditions, type SpeciesCandidate } from './speciesFromCalc.ts';
 export { importCalculations, type CalcImport } from './importCalculations.ts';

@@ -49,6 +49,9 @@ export function readGaussianLog(text: string): CalcRecord {
   let input: CalcAtom[] | null = null;
   let frequencies: number[] | null = null;
   let frequencyBlocks = 0;
+  // A header opens a block; it counts once its first "Frequencies --" row is read, since freq=hpmodes and
+  // IOp(7/33=1) print a high-precision table ("Frequencies ---") of the same modes under its own header first.
+  let blockOpen = false;
   let thermoT: { t: number; p: number } | null = null;
   let thermoRoute: string | null = null;
   const corrections: Record<'zpe' | 'e' | 'h' | 'g', number | null> = { zpe: null, e: null, h: null, g: null };
@@ -89,8 +92,9 @@ export function readGaussianLog(text: string): CalcRecord {
       i = block.end;
       continue;
     }
-    if (/Harmonic frequencies \(cm\*\*-1\)/.test(line)) { frequencies = []; frequencyBlocks++; continue; }
+    if (/Harmonic frequencies \(cm\*\*-1\)/.test(line)) { frequencies = []; blockOpen = true; continue; }
     if ((m = /^\s*Frequencies --\s+(.*)$/.exec(line)) && frequencies) {
+      if (blockOpen) { frequencyBlocks++; blockOpen = false; }
       for (const cell of m[1]!.trim().split(/\s+/)) {
         const f = fortranNumber(cell);
         if (f !== null) frequencies.push(f);
@@ -119,6 +123,9 @@ export function readGaussianLog(text: string): CalcRecord {
   const notes: string[] = [];
   const termination: Termination = lastTermination === 'error' ? 'abnormal' : lastTermination === 'normal' && !stepAfterTermination ? 'normal' : 'truncated';
   if (optRequested && optimisation === 'none') optimisation = 'not-converged';
+  if (!optRequested && optimisation === 'not-converged') {
+    notes.push('no optimisation in this job, and its own convergence check finds the geometry is not a stationary point at this level (a "NO" in the force and displacement table)');
+  }
   if (!energy) missing.push('final electronic energy (no "SCF Done" line)');
   if (charge === null) missing.push('charge and multiplicity');
   if (!atoms) missing.push('geometry');

@@ -66,7 +66,7 @@ export function speciesFromCalc(pair: CalcPair, id: string, conditions: CalcCond
   const { energy, corrections } = pair;
   const e = energy.record;
   const errors: string[] = [];
-  const warnings = [...fileWarnings(energy), ...(corrections && corrections !== energy ? fileWarnings(corrections) : [])];
+  const warnings = [...pair.notes, ...fileWarnings(energy), ...(corrections && corrections !== energy ? fileWarnings(corrections) : [])];
   if (e.energyHartree === null) errors.push(`${energy.name}: no electronic energy, so it cannot be a species`);
   const c = corrections?.record ?? null;
   const rrho = c && corrections ? recompute(c, conditions, warnings, corrections.name) : null;

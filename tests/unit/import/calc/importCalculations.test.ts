@@ -68,6 +68,26 @@ describe('importCalculations', () => {
   });
 });
 
+describe('importing a transition state', () => {
+  // RMG-Py's Gaussian 03 frequency job on the H + C2H4 transition state (tests/fixtures/qc/SOURCES.md): one imaginary mode, −757.8102 cm⁻¹.
+  const TS = qcFixture('g03-c2h5-ts-freq.log');
+
+  it('counts one imaginary frequency, keeps it with the species and makes it a TS in the added pathway', async () => {
+    const { addImportedSpecies } = await import('../../../../core/edit/importedSpecies.ts');
+    const { makeDocument } = await import('../../../../core/model/load.ts');
+    const result = importCalculations([{ name: 'c2h5.log', text: FREQ }, { name: 'ts1.log', text: TS }], AT_298);
+    expect(result.ok).toBe(true);
+    const [minimum, ts] = result.candidates;
+    expect(minimum!.imaginary).toBe(0);
+    expect(ts!.imaginary).toBe(1);
+    expect(ts!.species.structures[0]!.frequencies![0]).toBe(-757.8102);
+    expect(ts!.species).toMatchObject({ formula: 'C2H5', multiplicity: 2 });
+    expect(ts!.warnings.join(' ')).toMatch(/not a stationary point at this level/);
+    const doc = addImportedSpecies(makeDocument({ species: [], pathways: [] }), { species: result.candidates.map((c) => c.species), pathwayName: 'H + ethene' });
+    expect(doc.pathways[0]!.points.map((p) => p.kind)).toEqual(['min', 'ts']);
+  });
+});
+
 describe('corrections at another temperature', () => {
   it('are recomputed exactly from the stored frequencies when the document temperature changes', async () => {
     const { makeDocument } = await import('../../../../core/model/load.ts');

@@ -107,3 +107,31 @@ describe('readGaussianLog, frequency step followed by a single point', () => {
     expect(r.notes).toContain('the thermochemistry is from an earlier job step (b3lyp/sto-3g), the energy from the last (CCSD(T)/STO-3G)');
   });
 });
+
+describe('readGaussianLog, a transition state', () => {
+  // Excerpt of RMG-Py's examples/arkane/reactions/H+C2H4=C2H5/TS_freq.log (MIT License): Gaussian 03 D.01,
+  // UB3LYP/6-311G(d,p) frequency job on the H + C2H4 transition state; expected values are printed there.
+  const TS = qcFixture('g03-c2h5-ts-freq.log');
+
+  it('reads exactly one imaginary frequency, printed negative, among 3N − 6 = 15 for 7 atoms', () => {
+    const r = readGaussianLog(TS);
+    expect(r).toMatchObject({ version: 'Gaussian 03 D.01', charge: 0, multiplicity: 2, formula: 'C2H5', energyLabel: 'E(UB+HF-LYP)', termination: 'normal' });
+    expect(r.energyHartree).toBe(-79.1166134112);
+    expect(r.frequencies).toHaveLength(15);
+    expect(r.frequencies![0]).toBe(-757.8102);
+    expect(r.frequencies![14]).toBe(3234.209);
+    expect(imaginaryCount(r)).toBe(1);
+    expect(r.atoms![6]).toEqual({ symbol: 'H', x: 1.816168, y: -1.155271, z: 0 });
+    expect(r.thermo).toMatchObject({ temperatureK: 298.15, zpe: 0.052411, hCorrection: 0.056993, gCorrection: 0.028757 });
+  });
+
+  it('does not count the high-precision table of IOp(7/33=1) as a second frequency block', () => {
+    expect(readGaussianLog(TS).notes.join(' ')).not.toMatch(/frequency blocks/);
+  });
+
+  it('says when a frequency job finds its geometry is not a stationary point (its table: Maximum Force 0.004468 > 0.000450, NO)', () => {
+    const r = readGaussianLog(TS);
+    expect(r.optimisation).toBe('not-converged');
+    expect(r.notes.join(' ')).toMatch(/not a stationary point at this level/);
+  });
+});

@@ -47,11 +47,28 @@ describe('readOrcaOutput', () => {
   });
 });
 
-describe('readOrcaOutput, optimisation', () => {
-  it('reads an optimisation whose convergence banner is printed as converged', () => {
-    // ORCA's banner as quoted from real output in public ORCA tutorials (wording checked, not invented).
-    const banner = '                    ***********************HURRAY********************\n                    ***        THE OPTIMIZATION HAS CONVERGED     ***\n                    *************************************************\n';
-    const opt = OUT.replace('!  b3lyp sto-3g usesym freq', '!  b3lyp sto-3g opt freq').replace('---------------------------------\nCARTESIAN COORDINATES (ANGSTROEM)', `${banner}\n---------------------------------\nCARTESIAN COORDINATES (ANGSTROEM)`);
-    expect(readOrcaOutput(opt).optimisation).toBe('converged');
+describe('readOrcaOutput, a real geometry optimisation', () => {
+  // Excerpt of cclib's data/ORCA/basicORCA6.0/dvb_gopt.out (divinylbenzene, B3LYP/STO-3G, ORCA 6.0.0,
+  // converged after 3 cycles); every expected value below is printed in that file.
+  const GOPT = qcFixture('orca6-dvb-gopt.out');
+
+  it('reads the run as converged, with the last printed energy and the optimised geometry', () => {
+    const r = readOrcaOutput(GOPT);
+    expect(r).toMatchObject({ version: 'ORCA 6.0.0', charge: 0, multiplicity: 1, formula: 'C10H10', termination: 'normal', optimisation: 'converged' });
+    // The energy of the final evaluation at the stationary point, not the -382.055133025246 of the last cycle before it.
+    expect(r.energyHartree).toBe(-382.055133399486);
+    // The final block's first atom; the cycle-1 (input) geometry starts with C -1.415253 0.230222.
+    expect(r.atoms).toHaveLength(20);
+    expect(r.atoms![0]).toEqual({ symbol: 'C', x: -1.417709, y: 0.228462, z: 0 });
+    expect(r.atoms![19]).toEqual({ symbol: 'H', x: -4.934323, y: -0.067378, z: 0 });
+  });
+
+  it('reads the same run cut before the convergence banner (cut here, in the test) as not converged and unfinished', () => {
+    const cut = GOPT.slice(0, GOPT.indexOf('                    ***********************HURRAY'));
+    const r = readOrcaOutput(cut);
+    expect(r.optimisation).toBe('not-converged');
+    expect(r.termination).toBe('truncated');
+    expect(r.energyHartree).toBe(-382.055133025246);
+    expect(r.atoms![0]).toEqual({ symbol: 'C', x: -1.415253, y: 0.230222, z: 0 });
   });
 });

@@ -28,7 +28,7 @@ export function speciesFromRow(row: SpeciesRow, base: Species | undefined): { sp
     if (!column.numeric || cell === '') continue;
     const value = readNumber(cell, '\t');
     const refused = value === undefined ? `expected a number${column.unit ? ` in ${column.unit}` : ''}`
-      : column.sigmaOf ? sigmaProblem(value, column.unit === 'Eh' ? 'hartree' : 'kJ/mol', column.title) : null;
+      : column.sigmaOf ? sigmaProblem(value, column.unit === 'Eh' ? 'hartree' : 'kJ/mol') : null;
     if (refused !== null) problems.push({ column: column.key, value: cell, message: refused });
     else numbers[column.key] = value;
   }

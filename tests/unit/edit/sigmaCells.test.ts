@@ -34,11 +34,11 @@ describe('σ cells of the species sheet', () => {
   });
 
   it.each([
-    ['-0.001', 'σ E: expected a standard uncertainty ≥ 0, got -0.001'],
+    ['-0.001', 'expected a standard uncertainty ≥ 0, got -0.001'],
     ['abc', 'expected a number in Eh'],
     ['1e400', 'expected a number in Eh'],
     // 4 Eh = 10 502 kJ/mol (1 Eh = 2625.4996 kJ/mol, CODATA 2018), past the 10 000 kJ/mol limit.
-    ['4', 'σ E: standard uncertainty σ 10501.998 kJ/mol is outside 0 to 10000 kJ/mol'],
+    ['4', 'standard uncertainty σ 10501.998 kJ/mol is outside 0 to 10000 kJ/mol'],
   ])('a bad σ (%s) is refused with the column named and the document unchanged', (text, message) => {
     const doc = twoRoutes();
     const edit = setSpeciesCell(doc, { row: 0, column: 'sigma', text });

@@ -31,10 +31,10 @@ export const SPECIES_COLUMNS: readonly SpeciesColumn[] = [
   { key: 'S', title: 'S°', unit: 'J/(mol K)', numeric: true },
   { key: 'dfG', title: 'ΔfG°', unit: 'kJ/mol', numeric: true },
   // σ columns last, so a block pasted without a header still fills the columns above in order.
-  { key: 'sigma', title: 'σ E', unit: 'Eh', numeric: true, sigmaOf: 'electronic' },
-  { key: 'correctionSigma', title: 'σ correction', unit: 'Eh', numeric: true, sigmaOf: 'gCorrection' },
-  { key: 'dfHSigma', title: 'σ ΔfH°', unit: 'kJ/mol', numeric: true, sigmaOf: 'dfH' },
-  { key: 'dfGSigma', title: 'σ ΔfG°', unit: 'kJ/mol', numeric: true, sigmaOf: 'dfG' },
+  { key: 'sigma', title: 'σ(E)', unit: 'Eh', numeric: true, sigmaOf: 'electronic' },
+  { key: 'correctionSigma', title: 'σ(correction)', unit: 'Eh', numeric: true, sigmaOf: 'gCorrection' },
+  { key: 'dfHSigma', title: 'σ(ΔfH°)', unit: 'kJ/mol', numeric: true, sigmaOf: 'dfH' },
+  { key: 'dfGSigma', title: 'σ(ΔfG°)', unit: 'kJ/mol', numeric: true, sigmaOf: 'dfG' },
 ];
 
 /** Flat text cells of one species, as the sheet shows them (first conformer only). */

@@ -20,7 +20,8 @@ function defaultedKeys(doc: Document): ReadonlySet<string> {
   return keys;
 }
 
-const short = (v: number) => String(Number(v.toPrecision(3)));
+// Two figures: the placeholder must fit a four-digit field; the hint gives the default exactly.
+const short = (v: number) => String(Number(v.toPrecision(2)));
 
 /**
  * The hint of the σ field beside an entered energy in `unit`: with `key` among the inputs the

@@ -82,7 +82,7 @@ describe('σ cells of a conformer', () => {
     expect(ok.doc.species[0]!.structures[0]).toEqual({ electronic: -100, correctionSigma: 0.0003 });
     const bad = setConformerCell(ok.doc, { species: 'a', row: 0, column: 'sigma', text: '−1' });
     expect(bad.doc).toBe(ok.doc);
-    expect(bad.errors.map((e) => e.message)).toEqual(['σ E: expected a standard uncertainty ≥ 0, got -1']);
+    expect(bad.errors.map((e) => e.message)).toEqual(['σ(E): expected a standard uncertainty ≥ 0, got -1']);
   });
 });
 

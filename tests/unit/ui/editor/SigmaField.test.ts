@@ -102,7 +102,7 @@ describe('the σ beside a typed energy', () => {
     store.apply(setEnergy(store.doc, { pathway: 'p', point: 't', energy: { mode: 'barrier', value: 20, unit: 'kJ/mol' } }));
     render(MechanismPanel, { store });
     // 1 kcal/mol shown in the field's kJ/mol: 4.184.
-    expect(sigmaBox().placeholder).toBe('(4.18)');
+    expect(sigmaBox().placeholder).toBe('(4.2)');
     expect(sigmaBox().title).toMatch(/Empty: the document's default σ \(1 kcal mol⁻¹\) applies/);
     // A: the typed 0 that defines the zero takes no default σ.
     const first = screen.getByRole('textbox', { name: 'A energy σ' }) as HTMLInputElement;

@@ -9,16 +9,16 @@ describe('σ columns of the species sheet', () => {
   it('start folded; shown, a σ E typed in hartree lands on the structure and a negative one is named', async () => {
     const store = routeStore();
     render(SpeciesSheet, { store });
-    expect(screen.queryByRole('textbox', { name: 'σ E, row 1' })).toBeNull();
+    expect(screen.queryByRole('textbox', { name: 'σ(E), row 1' })).toBeNull();
     await fireEvent.click(screen.getByRole('checkbox', { name: 'σ (standard uncertainty)' }));
-    const cell = screen.getByRole('textbox', { name: 'σ E, row 1' }) as HTMLInputElement;
-    expect(screen.getByRole('columnheader', { name: /^σ E\b/ })).toBeTruthy();
+    const cell = screen.getByRole('textbox', { name: 'σ(E), row 1' }) as HTMLInputElement;
+    expect(screen.getByRole('columnheader', { name: /^σ\(E\)/ })).toBeTruthy();
     expect(cell.placeholder).toBe('σ');
     await fireEvent.input(cell, { target: { value: '0.0016' } });
     expect(store.doc.species[0]!.structures[0]).toEqual({ electronic: -10, sigma: 0.0016 });
     await fireEvent.input(cell, { target: { value: '-1' } });
     expect(store.doc.species[0]!.structures[0]!.sigma).toBe(0.0016);
-    expect(screen.getByRole('list', { name: 'Cells that could not be read' }).textContent).toContain('Row 1, σ E: expected a standard uncertainty ≥ 0');
+    expect(screen.getByRole('list', { name: 'Cells that could not be read' }).textContent).toContain('Row 1, σ(E): expected a standard uncertainty ≥ 0');
   });
 
   it('an empty σ E cell shows the document default that applies, in hartree', () => {
@@ -27,8 +27,8 @@ describe('σ columns of the species sheet', () => {
     store.apply(setSettings(store.doc, { uncertainty: { defaultSigma: 1, defaultSigmaUnit: 'kcal/mol', samples: 100, seed: 1 } }));
     render(SpeciesSheet, { store });
     return fireEvent.click(screen.getByRole('checkbox', { name: 'σ (standard uncertainty)' })).then(() => {
-      const cell = screen.getByRole('textbox', { name: 'σ E, row 1' }) as HTMLInputElement;
-      expect(cell.placeholder).toBe('(0.00159)');
+      const cell = screen.getByRole('textbox', { name: 'σ(E), row 1' }) as HTMLInputElement;
+      expect(cell.placeholder).toBe('(0.0016)');
       expect(cell.title).toMatch(/default σ \(1 kcal mol⁻¹\) applies/);
     });
   });

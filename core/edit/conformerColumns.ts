@@ -1,14 +1,15 @@
 import type { Structure } from '../model/schema.ts';
 import { readNumber } from '../import/delimited.ts';
 import { columnByName, SPECIES_COLUMNS, type SpeciesColumn } from './speciesColumns.ts';
+import { sigmaProblem } from './sigmaProblem.ts';
 
 /** The cells of one conformer (structure) of a species. */
-export type ConformerColumnKey = 'label' | 'electronic' | 'singlePoint' | 'hCorrection' | 'gCorrection';
+export type ConformerColumnKey = 'label' | 'electronic' | 'singlePoint' | 'hCorrection' | 'gCorrection' | 'sigma' | 'correctionSigma';
 
 /** A column of a conformer table (the species sheet's own column, so titles and units agree). */
 export type ConformerColumn = SpeciesColumn & { key: ConformerColumnKey };
 
-const KEYS: readonly ConformerColumnKey[] = ['label', 'electronic', 'singlePoint', 'hCorrection', 'gCorrection'];
+const KEYS: readonly ConformerColumnKey[] = ['label', 'electronic', 'singlePoint', 'hCorrection', 'gCorrection', 'sigma', 'correctionSigma'];
 const isConformerColumn = (c: SpeciesColumn | undefined): c is ConformerColumn => c !== undefined && (KEYS as readonly string[]).includes(c.key);
 
 /** The conformer table's columns in order (a pasted block without a header fills them in this order). */
@@ -29,7 +30,10 @@ const text = (v: number | undefined) => (v === undefined ? '' : String(v));
 
 /** The cells of a conformer. */
 export function conformerRow(s: Structure | undefined): ConformerRow {
-  return { label: s?.label ?? '', electronic: text(s?.electronic), singlePoint: text(s?.singlePoint), hCorrection: text(s?.hCorrection), gCorrection: text(s?.gCorrection) };
+  return {
+    label: s?.label ?? '', electronic: text(s?.electronic), singlePoint: text(s?.singlePoint), hCorrection: text(s?.hCorrection), gCorrection: text(s?.gCorrection),
+    sigma: text(s?.sigma), correctionSigma: text(s?.correctionSigma),
+  };
 }
 
 /** Finds a conformer column by key or title as a header might spell it ("G correction", "E"). */
@@ -51,7 +55,8 @@ export function structureFromRow(row: ConformerRow, at: number): { structure: St
     const cell = row[column.key].trim();
     if (column.key === 'label' || cell === '') continue;
     const value = readNumber(cell, '\t');
-    if (value === undefined) errors.push({ row: at, column: column.key, value: cell, message: `${column.title}: expected a number in hartree, got "${cell}"` });
+    const refused = value === undefined ? `${column.title}: expected a number in hartree, got "${cell}"` : column.sigmaOf ? sigmaProblem(value, 'hartree', column.title) : null;
+    if (refused !== null) errors.push({ row: at, column: column.key, value: cell, message: refused });
     else structure[column.key as Exclude<ConformerColumnKey, 'label'>] = value;
   }
   if (row.electronic.trim() === '') errors.push({ row: at, column: 'electronic', value: '', message: 'E: expected the electronic energy in hartree; every conformer needs one' });

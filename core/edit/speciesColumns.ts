@@ -6,12 +6,15 @@ export interface SpeciesColumn {
   title: string;
   unit: string | null;
   numeric: boolean;
+  /** A σ column: the column whose standard uncertainty it holds, in that column's unit. */
+  sigmaOf?: SpeciesColumnKey;
 }
 
 export type SpeciesColumnKey =
   | 'id' | 'label' | 'formula' | 'charge' | 'phase'
   | 'electronic' | 'singlePoint' | 'hCorrection' | 'gCorrection'
-  | 'dfH' | 'S' | 'dfG';
+  | 'dfH' | 'S' | 'dfG'
+  | 'sigma' | 'correctionSigma' | 'dfHSigma' | 'dfGSigma';
 
 /** The sheet's columns in order (a pasted block without a header fills them in this order). */
 export const SPECIES_COLUMNS: readonly SpeciesColumn[] = [
@@ -27,6 +30,11 @@ export const SPECIES_COLUMNS: readonly SpeciesColumn[] = [
   { key: 'dfH', title: 'ΔfH°', unit: 'kJ/mol', numeric: true },
   { key: 'S', title: 'S°', unit: 'J/(mol K)', numeric: true },
   { key: 'dfG', title: 'ΔfG°', unit: 'kJ/mol', numeric: true },
+  // σ columns last, so a block pasted without a header still fills the columns above in order.
+  { key: 'sigma', title: 'σ(E)', unit: 'Eh', numeric: true, sigmaOf: 'electronic' },
+  { key: 'correctionSigma', title: 'σ(correction)', unit: 'Eh', numeric: true, sigmaOf: 'gCorrection' },
+  { key: 'dfHSigma', title: 'σ(ΔfH°)', unit: 'kJ/mol', numeric: true, sigmaOf: 'dfH' },
+  { key: 'dfGSigma', title: 'σ(ΔfG°)', unit: 'kJ/mol', numeric: true, sigmaOf: 'dfG' },
 ];
 
 /** Flat text cells of one species, as the sheet shows them (first conformer only). */
@@ -42,6 +50,8 @@ export function speciesRow(s: Species): SpeciesRow {
     electronic: text(first?.electronic), singlePoint: text(first?.singlePoint),
     hCorrection: text(first?.hCorrection), gCorrection: text(first?.gCorrection),
     dfH: text(s.formation?.dfH), S: text(s.formation?.S), dfG: text(s.formation?.dfG),
+    sigma: text(first?.sigma), correctionSigma: text(first?.correctionSigma),
+    dfHSigma: text(s.formation?.dfHSigma), dfGSigma: text(s.formation?.dfGSigma),
   };
 }
 

@@ -1,6 +1,7 @@
 import { Species, type Structure } from '../model/schema.ts';
 import { readNumber } from '../import/delimited.ts';
 import { SPECIES_COLUMNS, type SpeciesColumnKey, type SpeciesRow } from './speciesColumns.ts';
+import { sigmaProblem } from './sigmaProblem.ts';
 
 /** A bad cell: which column and why (the row is added by the caller). */
 export interface CellProblem {
@@ -26,7 +27,9 @@ export function speciesFromRow(row: SpeciesRow, base: Species | undefined): { sp
     const cell = row[column.key].trim();
     if (!column.numeric || cell === '') continue;
     const value = readNumber(cell, '\t');
-    if (value === undefined) problems.push({ column: column.key, value: cell, message: `expected a number${column.unit ? ` in ${column.unit}` : ''}` });
+    const refused = value === undefined ? `expected a number${column.unit ? ` in ${column.unit}` : ''}`
+      : column.sigmaOf ? sigmaProblem(value, column.unit === 'Eh' ? 'hartree' : 'kJ/mol') : null;
+    if (refused !== null) problems.push({ column: column.key, value: cell, message: refused });
     else numbers[column.key] = value;
   }
   const id = row.id.trim();
@@ -34,9 +37,9 @@ export function speciesFromRow(row: SpeciesRow, base: Species | undefined): { sp
   const typedPhase = row.phase.trim().replace(/^\((.*)\)$/, '$1').toLowerCase() || 'solute';
   const phase = PHASE_SYMBOLS[typedPhase] ?? typedPhase;
   if (!(PHASES as readonly string[]).includes(phase)) problems.push({ column: 'phase', value: row.phase.trim(), message: `expected one of ${PHASES.join(', ')} (or g, l, s, aq)` });
-  const hasStructure = ['singlePoint', 'hCorrection', 'gCorrection'].some((k) => row[k as SpeciesColumnKey].trim() !== '');
+  const hasStructure = ['singlePoint', 'hCorrection', 'gCorrection', 'sigma', 'correctionSigma'].some((k) => row[k as SpeciesColumnKey].trim() !== '');
   if (numbers.electronic === undefined && hasStructure && row.electronic.trim() === '') {
-    problems.push({ column: 'electronic', value: '', message: 'expected the electronic energy (Eh) when a single point or a correction is given' });
+    problems.push({ column: 'electronic', value: '', message: 'expected the electronic energy (Eh) when a single point, a correction or a σ is given' });
   }
   if (problems.length > 0) return { species: null, problems };
 
@@ -46,9 +49,11 @@ export function speciesFromRow(row: SpeciesRow, base: Species | undefined): { sp
     if (numbers.singlePoint !== undefined) first.singlePoint = numbers.singlePoint;
     if (numbers.hCorrection !== undefined) first.hCorrection = numbers.hCorrection;
     if (numbers.gCorrection !== undefined) first.gCorrection = numbers.gCorrection;
+    if (numbers.sigma !== undefined) first.sigma = numbers.sigma;
+    if (numbers.correctionSigma !== undefined) first.correctionSigma = numbers.correctionSigma;
     structures.unshift(first);
   }
-  const formation = { ...(numbers.dfH !== undefined ? { dfH: numbers.dfH } : {}), ...(numbers.S !== undefined ? { S: numbers.S } : {}), ...(numbers.dfG !== undefined ? { dfG: numbers.dfG } : {}) };
+  const formation = Object.fromEntries((['dfH', 'S', 'dfG', 'dfHSigma', 'dfGSigma'] as const).flatMap((k) => (numbers[k] === undefined ? [] : [[k, numbers[k]]])));
   const candidate = {
     ...(base ?? {}),
     id, label: row.label, phase, structures,

@@ -34,6 +34,11 @@ export const BOUNDS = {
   rateConstant: bound('rate constant', '(s⁻¹, M⁻¹ s⁻¹, …)', [1e-40, 1e20], [1e-20, 1e13]),
   /** Half-life or a simulated time span. h/(k_B T) ≈ 1.6 × 10⁻¹³ s at 298 K is the fastest step. */
   timeSeconds: bound('time', 's', [1e-15, 1e20], [1e-12, 1e12]),
+  /**
+   * Standard uncertainty σ of an entered energy, in kJ/mol (any input unit converts; issue 18).
+   * Computed relative energies carry 1–3 kcal/mol (4–13 kJ/mol) of method error (common practice).
+   */
+  uncertaintyKJ: bound('standard uncertainty σ', 'kJ/mol', [0, 10_000], [0, 40]),
   /** Marcus reorganisation energy λ, in kJ/mol. */
   reorganisationKJ: bound('reorganisation energy λ', 'kJ/mol', [1e-3, 10_000], [10, 1_000]),
   /** Figure width or height. */

@@ -91,3 +91,33 @@ export function convertInput(value: number, from: EnergyUnit, to: EnergyUnit): n
 
 /** A typed energy in `unit` as kJ/mol, the unit of the energy bounds in core/model/bounds.ts. */
 export const inKJ = (unit: EnergyUnit) => (value: number) => convertEnergy(value, unit, 'kJ/mol');
+
+/**
+ * `entry` with its unit changed to `unit` and each named energy in it (a value and its σ)
+ * re-expressed by {@link convertInput}, so both keep the physical amount; an absent σ stays absent.
+ */
+export function withUnit<T extends { unit: EnergyUnit }>(entry: T, unit: EnergyUnit, keys: readonly (keyof T)[]): T {
+  const next = { ...entry, unit };
+  for (const key of keys) {
+    const v = entry[key];
+    if (typeof v === 'number') (next as Record<keyof T, unknown>)[key] = convertInput(v, entry.unit, unit);
+  }
+  return next;
+}
+
+/** `entry` with σ set, or without a σ key when `sigma` is undefined (the document keeps no empty field). */
+export function withSigma<T extends object, K extends string>(entry: T, key: K, sigma: number | undefined): T {
+  const next = { ...entry } as Record<string, unknown>;
+  if (sigma === undefined) delete next[key]; else next[key] = sigma;
+  return next as T;
+}
+
+/**
+ * A typed value, step or barrier keeps its σ (in the new spec's unit) when the point switches
+ * between those modes, as the user's number stays what it was; other modes carry their own σ.
+ */
+export function carrySigma(from: EnergySpec, to: EnergySpec): EnergySpec {
+  const typed = (e: EnergySpec) => e.mode === 'value' || e.mode === 'step' || e.mode === 'barrier';
+  if (!typed(from) || !typed(to) || !('sigma' in from) || from.sigma === undefined || !('unit' in to)) return to;
+  return { ...to, sigma: convertInput(from.sigma, from.unit, to.unit) } as EnergySpec;
+}

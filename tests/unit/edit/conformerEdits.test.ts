@@ -91,9 +91,10 @@ describe('conformer edits', () => {
       { label: 'y', electronic: -100.002, hCorrection: 0.071, gCorrection: 0.051 },
       { electronic: -100.003, singlePoint: -99.9, hCorrection: 0.072, gCorrection: 0.052 },
     ]);
-    const bad = pasteConformers(doc, { species: 'a', row: 0, column: 'electronic', text: '-1OO\t\tx\n\t-99\n-1\t\t\t\t9' });
+    const bad = pasteConformers(doc, { species: 'a', row: 0, column: 'electronic', text: '-1OO\t\tx\n\t-99\n-1\t\t\t\t\t\t9' });
     expect(bad.doc).toBe(doc);
-    expect(bad.errors.map((e) => [e.row, e.column, e.value])).toEqual([[2, 'gCorrection', '9']]);
+    // The seventh cell from E lies past σ correction, the last conformer column.
+    expect(bad.errors.map((e) => [e.row, e.column, e.value])).toEqual([[2, 'correctionSigma', '9']]);
     const cells = pasteConformers(doc, { species: 'a', row: 0, column: 'electronic', text: '-1OO\t\tx\n-100\t-99,5,1' });
     expect(cells.doc).toBe(doc);
     expect(cells.errors.map((e) => [e.row, e.column, e.message])).toEqual([

@@ -4,6 +4,7 @@ import type { SpeciesRow } from '../../../core/edit/speciesColumns.ts';
 
 const row = (phase: string): SpeciesRow => ({
   id: 'w', label: 'W', formula: '', charge: '', phase, electronic: '-76.4', singlePoint: '', hCorrection: '', gCorrection: '', dfH: '', S: '', dfG: '',
+  sigma: '', correctionSigma: '', dfHSigma: '', dfGSigma: '',
 });
 
 // State symbols g, l, s, aq as chemists write them (IUPAC Green Book, from memory).

@@ -34,6 +34,12 @@ export const BOUNDS = {
   rateConstant: bound('rate constant', '(s⁻¹, M⁻¹ s⁻¹, …)', [1e-40, 1e20], [1e-20, 1e13]),
   /** Half-life or a simulated time span. h/(k_B T) ≈ 1.6 × 10⁻¹³ s at 298 K is the fastest step. */
   timeSeconds: bound('time', 's', [1e-15, 1e20], [1e-12, 1e12]),
+  /**
+   * σ/value of a rate constant or half-life (issue 18). Such a positive input is sampled
+   * log-normally with σ_ln = σ/value, so e^{zσ/value} must stay finite; beyond 1 the
+   * first-order reading σ_ln ≈ σ/value is crude (common practice: quote a factor instead).
+   */
+  relativeSigma: bound('relative uncertainty σ/value', '', [0, 10], [0, 1]),
   /** Marcus reorganisation energy λ, in kJ/mol. */
   reorganisationKJ: bound('reorganisation energy λ', 'kJ/mol', [1e-3, 10_000], [10, 1_000]),
   /** Figure width or height. */

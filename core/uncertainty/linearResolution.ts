@@ -14,6 +14,10 @@ function flatten(profile: ResolvedProfile): Float64Array {
  * Inputs that `resolveProfile` adds into point energies with a fixed weight: typed values,
  * steps, barriers (sums), BEP E₀ (a sum), formation values (Σ count × ΔfX°), a single
  * structure's energy or correction, and a whole species' shift (G_eff(x + δ) = G_eff(x) + δ).
+ * Rate constants and half-lives are sampled log-normally, ln k = ln k₀ + z·σ/k₀, and every
+ * estimate built on them is linear in ln k: inverse Eyring (Δ‡G = RT ln(κk_BT/h) − RT ln k),
+ * the half-life (+RT ln t½), and the least-squares Eyring and Arrhenius lines (slope and
+ * intercept are fixed linear combinations of the ln k values), so they stay on this path.
  * A Marcus estimate depends on its neighbours quadratically and a single conformer of an
  * ensemble moves G_eff non-linearly: documents with those are sampled in full.
  */

@@ -57,7 +57,8 @@ export interface UncertaintyRun {
 
 /**
  * Monte Carlo propagation of the document's input uncertainties (normal deviates from a
- * seeded generator, σ as entered). Each sample is the document with perturbed inputs run
+ * seeded generator, σ as entered; rate constants and half-lives log-normal, see
+ * `logNormalShift`). Each sample is the document with perturbed inputs run
  * through `analyseDocument` — resolution, the TS-below rule, effective barrier, energetic
  * span, comparisons, selectivity — or, when every input enters the resolution linearly,
  * through `analyseResolved` on the profile from `linearResolution` (same resolver, same

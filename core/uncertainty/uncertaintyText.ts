@@ -1,5 +1,6 @@
 import { unitLabel } from '../units/energy.ts';
 import type { UncertainReport } from './annotateReport.ts';
+import { sigmaUnitLabel } from './uncertainInputs.ts';
 import { intervalOf, probabilitiesOf, type Holder } from './reportReaders.ts';
 
 const sci = (x: number) => x.toPrecision(3);
@@ -29,7 +30,7 @@ export function uncertaintyText(report: UncertainReport, decimals = 1): string {
     lines.push('  no input carries a σ: give "sigma" beside an entered value, or a default σ in settings.uncertainty.defaultSigma');
     return `${lines.join('\n')}\n`;
   }
-  lines.push(`  inputs (σ as entered): ${u.inputs.map((i) => `${i.input} ${i.sigma} ${unitLabel(i.unit as never)}${i.default ? ' (default)' : ''}`).join('; ')}`);
+  lines.push(`  inputs (σ as entered): ${u.inputs.map((i) => `${i.input} ${i.sigma} ${sigmaUnitLabel(i.unit)}${i.default ? ' (default)' : ''}`).join('; ')}`);
   for (const p of report.pathways) {
     lines.push(`  ${p.name}`);
     lines.push(`    energies / ${unit}: ${p.points.map((q) => `${q.label} ${interval(q as Holder, 'energy', e)}`).join('; ')}`);

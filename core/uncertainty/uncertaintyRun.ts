@@ -100,7 +100,8 @@ export function startUncertainty(doc: Document, options: UncertaintyOptions = {}
     },
     result() {
       const n = done;
-      const quantityResults = quantities.map(({ read, ...rest }, k): QuantityResult => ({ ...rest, point: read(a0), interval: summarise(values[k]!.subarray(0, n)) }));
+      const scratch = new Float64Array(n);
+      const quantityResults = quantities.map(({ read, ...rest }, k): QuantityResult => ({ ...rest, point: read(a0), interval: summarise(values[k]!.subarray(0, n), scratch) }));
       const choiceResults = choices.map(({ read, ...rest }, k): ChoiceResult => ({ ...rest, point: read(a0), probabilities: frequencies(outcomes[k]!.slice(0, n)) }));
       const sensitivity: RateSensitivity[] = [];
       a0.pathways.forEach((pa) => {

@@ -50,17 +50,41 @@ export function linearResolution(doc: Document, inputs: readonly UncertainInput[
     const shifted = flatten(resolveProfile(perturbDocument(doc, inputs, deltas)));
     for (let k = 0; k < n; k++) columns[k * m + i] = shifted[k]! - e0[k]!;
   });
+  // Each point's non-zero column entries (a typed value moves one point; a step the points after it).
+  const rowStart = new Int32Array(n + 1);
+  const nonZero: number[] = [];
+  const weights: number[] = [];
+  for (let k = 0; k < n; k++) {
+    for (let i = 0; i < m; i++) {
+      const c = columns[k * m + i]!;
+      if (c !== 0) { nonZero.push(i); weights.push(c); }
+    }
+    rowStart[k + 1] = nonZero.length;
+  }
+  const index = Int32Array.from(nonZero);
+  const weight = Float64Array.from(weights);
   const energies = new Float64Array(n);
-  // Terms are added in input order onto e0, and an input with z = 0 adds nothing, as a sum over inputs would.
+  // Terms are added in input order onto e0 and an input with z = 0 adds nothing, as the dense
+  // sum over all inputs does. Leaving out a zero entry (z·0 = ±0) changes a sum only while it is
+  // zero (−0 + 0 = +0): a point whose sparse sum is zero is summed densely, so the result is the
+  // dense sum bit for bit.
+  const dense = (z: ArrayLike<number>, offset: number, k: number) => {
+    let e = e0[k]!;
+    const row = k * m;
+    for (let i = 0; i < m; i++) {
+      const zi = z[offset + i]!;
+      if (zi !== 0) e += zi * columns[row + i]!;
+    }
+    return e;
+  };
   const predict = (z: ArrayLike<number>, offset = 0) => {
     for (let k = 0; k < n; k++) {
       let e = e0[k]!;
-      const row = k * m;
-      for (let i = 0; i < m; i++) {
-        const zi = z[offset + i]!;
-        if (zi !== 0) e += zi * columns[row + i]!;
+      for (let p = rowStart[k]!; p < rowStart[k + 1]!; p++) {
+        const zi = z[offset + index[p]!]!;
+        if (zi !== 0) e += zi * weight[p]!;
       }
-      energies[k] = e;
+      energies[k] = e === 0 ? dense(z, offset, k) : e;
     }
     return energies;
   };

@@ -31,18 +31,21 @@ function selectInPlace(xs: Float64Array, k: number, left: number, right: number)
 
 /**
  * The p-quantile of `xs` by linear interpolation between order statistics (Hyndman & Fan
- * type 7, the rule of d3's quantile), in O(N); `xs` is reordered. `from` is the index of an
- * order statistic already in place (everything before it is no larger), so quantiles asked in
- * increasing order each search only what lies above the last.
+ * type 7, the rule of d3's quantile), in O(N); `xs` is reordered. `to` is the index of an
+ * order statistic already in place (nothing after it is smaller), so quantiles asked from the
+ * highest down each search only what lies below the last, and the next order statistic is the
+ * smallest value up to `to`.
  */
-function quantileInPlace(xs: Float64Array, p: number, from = 0): { value: number; at: number } {
+function quantileInPlace(xs: Float64Array, p: number, to = xs.length - 1): { value: number; at: number } {
   const h = (xs.length - 1) * p;
   const i0 = Math.floor(h);
-  selectInPlace(xs, i0, Math.min(from, i0), xs.length - 1);
+  const right = Math.max(to, i0);
+  selectInPlace(xs, i0, 0, right);
   let next = xs[i0]!;
   if (i0 + 1 < xs.length) {
     next = Infinity;
-    for (let i = i0 + 1; i < xs.length; i++) if (xs[i]! < next) next = xs[i]!;
+    const end = i0 + 1 <= right ? right : xs.length - 1;
+    for (let i = i0 + 1; i <= end; i++) if (xs[i]! < next) next = xs[i]!;
   }
   return { value: xs[i0]! + (next - xs[i0]!) * (h - i0), at: i0 };
 }
@@ -64,9 +67,9 @@ export function summarise(values: Float64Array, scratch?: Float64Array): Interva
   let ss = 0;
   for (let i = 0; i < n; i++) ss += (xs[i]! - mean) ** 2;
   const sd = n > 1 ? Math.sqrt(ss / (n - 1)) : 0;
-  const low = quantileInPlace(xs, 0.025);
-  const median = quantileInPlace(xs, 0.5, low.at);
-  const high = quantileInPlace(xs, 0.975, median.at);
+  const high = quantileInPlace(xs, 0.975);
+  const median = quantileInPlace(xs, 0.5, high.at);
+  const low = quantileInPlace(xs, 0.025, median.at);
   return { median: median.value, low: low.value, high: high.value, sd, samples: n };
 }
 

@@ -67,12 +67,15 @@ const DIFFUSION_LIMIT = 1e10;
 
 function fasterThanDiffusion({ pathway, steps }: PathwayAnalysis, standardState: string): Finding[] {
   const out: Finding[] = [];
-  for (const s of steps) {
-    for (const [k, m, unit, dir] of [[s.kForward, s.molecularityForward, s.unitForward, 'forward'], [s.kReverse, s.molecularityReverse, s.unitReverse, 'reverse']] as const) {
-      if (k !== null && m === 2 && k > DIFFUSION_LIMIT) {
-        out.push({ severity: 'info', code: 'faster-than-diffusion', pathway: pathway.id, point: (s.ts ?? s.to).id, message: `the ${dir} rate constant of ${s.from.label} → ${s.to.label} is ${formatScientific(k)} ${unit} (${standardState}), above the diffusion limit (~10¹⁰ M⁻¹ s⁻¹ at c° = 1 mol/L, common practice); the step is diffusion-controlled in practice` });
-      }
+  const check = (s: KineticStep, k: number | null, m: number, unit: string, dir: string) => {
+    if (k !== null && m === 2 && k > DIFFUSION_LIMIT) {
+      out.push({ severity: 'info', code: 'faster-than-diffusion', pathway: pathway.id, point: (s.ts ?? s.to).id, message: `the ${dir} rate constant of ${s.from.label} → ${s.to.label} is ${formatScientific(k)} ${unit} (${standardState}), above the diffusion limit (~10¹⁰ M⁻¹ s⁻¹ at c° = 1 mol/L, common practice); the step is diffusion-controlled in practice` });
     }
+  };
+  // Called once per Monte Carlo sample (core/uncertainty): no arrays built per step.
+  for (const s of steps) {
+    check(s, s.kForward, s.molecularityForward, s.unitForward, 'forward');
+    check(s, s.kReverse, s.molecularityReverse, s.unitReverse, 'reverse');
   }
   return out;
 }

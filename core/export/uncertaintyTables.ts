@@ -1,7 +1,7 @@
 import type { UncertainReport } from '../uncertainty/annotateReport.ts';
 import { probabilitiesOf, type Holder } from '../uncertainty/reportReaders.ts';
 import { uncertaintyStatement } from '../uncertainty/uncertaintyStatement.ts';
-import { unitLabel, type EnergyUnit } from '../units/energy.ts';
+import { sigmaUnitLabel } from '../uncertainty/uncertainInputs.ts';
 import type { Table } from './tables.ts';
 
 /** The tables a Monte Carlo run adds to the analysis tables. */
@@ -47,7 +47,7 @@ export function uncertaintyTables(report: UncertainReport): UncertaintyTables {
     run: { columns: ['samples N', 'seed', 'method', 'interval'], rows: [[u.samples, u.seed, u.method, u.interval]] },
     inputs: {
       columns: ['input', 'σ (unit in next column)', 'σ unit', 'σ from'],
-      rows: u.inputs.map((i) => [i.input, i.sigma, unitLabel(i.unit as EnergyUnit), i.default ? 'document default (settings.uncertainty.defaultSigma)' : 'typed with the input']),
+      rows: u.inputs.map((i) => [i.input, i.sigma, sigmaUnitLabel(i.unit), i.default ? 'document default (settings.uncertainty.defaultSigma)' : 'typed with the input']),
     },
     probabilities: {
       columns: ['pathway or comparison', 'result', 'outcome', 'probability / %'],

@@ -50,3 +50,17 @@ export function checkEnergyField<K extends string>(name: 'relativeEnergyKJ' | 'r
     if (problem) ctx.addIssue({ code: 'custom', message: problem, path: [key], input: obj[key] });
   };
 }
+
+/**
+ * Adds an issue at `sigmaKey` when σ/value of a positive input (a rate constant, a half-life)
+ * is outside the `relativeSigma` bound. A σ that is itself invalid is left to its own check.
+ */
+export function checkRelativeSigma<V extends string, S extends string>(valueKey: V, sigmaKey: S) {
+  return (obj: Record<V, number> & Partial<Record<S, number>>, ctx: z.RefinementCtx) => {
+    const sigma = obj[sigmaKey];
+    const value = obj[valueKey];
+    if (sigma === undefined || !(sigma >= 0) || !Number.isFinite(sigma) || !(value > 0)) return;
+    const problem = outsideHard('relativeSigma', sigma / value);
+    if (problem) ctx.addIssue({ code: 'custom', message: `${sigmaKey} ${sigma} with ${valueKey} ${value}: ${problem}`, path: [sigmaKey], input: sigma });
+  };
+}

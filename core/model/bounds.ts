@@ -39,6 +39,12 @@ export const BOUNDS = {
    * Computed relative energies carry 1–3 kcal/mol (4–13 kJ/mol) of method error (common practice).
    */
   uncertaintyKJ: bound('standard uncertainty σ', 'kJ/mol', [0, 10_000], [0, 40]),
+  /**
+   * σ/value of a rate constant or half-life (issue 18). Such a positive input is sampled
+   * log-normally with σ_ln = σ/value, so e^{zσ/value} must stay finite; beyond 1 the
+   * first-order reading σ_ln ≈ σ/value is crude (common practice: quote a factor instead).
+   */
+  relativeSigma: bound('relative uncertainty σ/value', '', [0, 10], [0, 1]),
   /** Marcus reorganisation energy λ, in kJ/mol. */
   reorganisationKJ: bound('reorganisation energy λ', 'kJ/mol', [1e-3, 10_000], [10, 1_000]),
   /** Figure width or height. */

@@ -1,7 +1,7 @@
 import './zodSetup.ts';
 import * as z from 'zod';
 import { ENERGY_UNITS } from '../units/energy.ts';
-import { bounded, boundedInt, boundedText, checkEnergyField } from './bounded.ts';
+import { bounded, boundedInt, boundedText, checkEnergyField, checkRelativeSigma } from './bounded.ts';
 import { BOUNDS, outsideHard } from './bounds.ts';
 import { describe } from './describe.ts';
 
@@ -126,12 +126,13 @@ const EnergyFormation = z.strictObject({ mode: z.literal('formation'), terms: z.
 const EnergyStep = z.strictObject({ mode: z.literal('step'), value: valueIn, unit: Unit, quantity: Quantity.optional(), sigma: sigma('') }).superRefine(checkEnergyField('relativeEnergyKJ', 'value'));
 const EnergyBarrier = z.strictObject({ mode: z.literal('barrier'), value: valueIn, unit: Unit, quantity: Quantity.optional(), sigma: sigma('') }).superRefine(checkEnergyField('relativeEnergyKJ', 'value'));
 
-const RatePoint = z.strictObject({ temperatureK: bounded('temperatureK', ' in K'), k: bounded('rateConstant', ' (rate constant)') });
+/** `kSigma`, `secondsSigma`: σ of a rate constant (its unit) or half-life (s); sampled log-normally (core/uncertainty). */
+const RatePoint = z.strictObject({ temperatureK: bounded('temperatureK', ' in K'), k: bounded('rateConstant', ' (rate constant)'), kSigma: sigma(' (σ of k)') }).superRefine(checkRelativeSigma('k', 'kSigma'));
 export const Estimate = z.discriminatedUnion('method', [
   z.strictObject({ method: z.literal('marcus'), lambda: positive(''), unit: Unit, lambdaSigma: sigma('') }).superRefine(checkEnergyField('reorganisationKJ', 'lambda')),
   z.strictObject({ method: z.literal('bep'), e0: valueIn, alpha: bounded('bepSlope'), unit: Unit, e0Sigma: sigma('') }).superRefine(checkEnergyField('relativeEnergyKJ', 'e0')),
-  z.strictObject({ method: z.literal('rateConstant'), k: bounded('rateConstant', ' (rate constant)'), molecularity: z.int().min(1).max(3).default(1), temperatureK: bounded('temperatureK', ' in K').optional() }),
-  z.strictObject({ method: z.literal('halfLife'), seconds: bounded('timeSeconds', ' in s'), temperatureK: bounded('temperatureK', ' in K').optional() }),
+  z.strictObject({ method: z.literal('rateConstant'), k: bounded('rateConstant', ' (rate constant)'), molecularity: z.int().min(1).max(3).default(1), temperatureK: bounded('temperatureK', ' in K').optional(), kSigma: sigma(' (σ of k)') }).superRefine(checkRelativeSigma('k', 'kSigma')),
+  z.strictObject({ method: z.literal('halfLife'), seconds: bounded('timeSeconds', ' in s'), temperatureK: bounded('temperatureK', ' in K').optional(), secondsSigma: sigma(' in s') }).superRefine(checkRelativeSigma('seconds', 'secondsSigma')),
   z.strictObject({ method: z.literal('eyringFit'), data: z.array(RatePoint).min(2, 'expected at least two (T, k) points') }),
   z.strictObject({ method: z.literal('arrhenius'), data: z.array(RatePoint).min(2, 'expected at least two (T, k) points') }),
 ], { error: (i) => `expected an estimate method (marcus, bep, rateConstant, halfLife, eyringFit, arrhenius), got ${describe((i.input as { method?: unknown } | undefined)?.method)}` });

@@ -60,7 +60,7 @@ export function annotateReport(report: AnalysisReport, result: UncertaintyResult
   }
   const label = new Map(result.inputs.map((i) => [i.key, i.label]));
   out.uncertainty = {
-    method: `Monte Carlo over normal input errors (${result.method === 'full' ? 'every sample resolved and analysed' : 'linear resolution once per input, every sample analysed'})`,
+    method: `Monte Carlo over normal input errors${result.inputs.some((i) => i.distribution === 'logNormal') ? ', log-normal for rate constants and half-lives' : ''} (${result.method === 'full' ? 'every sample resolved and analysed' : 'linear resolution once per input, every sample analysed'})`,
     samples: result.samples,
     seed: result.seed,
     interval: 'median and 95 % interval (2.5th–97.5th percentiles)',

@@ -1,13 +1,41 @@
 import type { Document, EnergySpec, Point, Species, Structure } from '../model/schema.ts';
-import type { UncertainInput } from './uncertainInputs.ts';
+import type { InputTarget, UncertainInput } from './uncertainInputs.ts';
 
-function shiftPoint(point: Point, field: 'value' | 'lambda' | 'e0', delta: number): Point {
+/**
+ * A positive input (rate constant, half-life) moved by `delta` in its own unit, log-normally:
+ * value·exp(delta/value), i.e. ln value ~ N(ln value₀, (σ/value₀)²) for delta = z·σ. Chosen
+ * over a normal (which can reach k ≤ 0, where no barrier exists) and over a truncated normal
+ * (whose rejections bias the tail): it never leaves k > 0, keeps the entered value as the
+ * median, matches σ to first order (σ_ln = σ/value is the relative standard uncertainty), and
+ * makes the Eyring barrier ±RT ln k exactly normal, so a measured k and a computed barrier
+ * carry the same kind of error (GUM, JCGM 101:2008 §6.4.6 for log-normal inputs, from memory).
+ */
+export function logNormalShift(value: number, delta: number): number {
+  return value * Math.exp(delta / value);
+}
+
+type PointField = Extract<InputTarget, { kind: 'point' }>['field'];
+
+function shiftPoint(point: Point, field: PointField, delta: number): Point {
   const e = point.energy;
   let energy: EnergySpec = e;
   if (field === 'value' && (e.mode === 'value' || e.mode === 'step' || e.mode === 'barrier')) energy = { ...e, value: e.value + delta };
-  else if (e.mode === 'estimate' && field === 'lambda' && e.estimate.method === 'marcus') energy = { ...e, estimate: { ...e.estimate, lambda: e.estimate.lambda + delta } };
-  else if (e.mode === 'estimate' && field === 'e0' && e.estimate.method === 'bep') energy = { ...e, estimate: { ...e.estimate, e0: e.estimate.e0 + delta } };
+  else if (e.mode === 'estimate') {
+    const est = e.estimate;
+    if (field === 'lambda' && est.method === 'marcus') energy = { ...e, estimate: { ...est, lambda: est.lambda + delta } };
+    else if (field === 'e0' && est.method === 'bep') energy = { ...e, estimate: { ...est, e0: est.e0 + delta } };
+    else if (field === 'k' && est.method === 'rateConstant') energy = { ...e, estimate: { ...est, k: logNormalShift(est.k, delta) } };
+    else if (field === 'seconds' && est.method === 'halfLife') energy = { ...e, estimate: { ...est, seconds: logNormalShift(est.seconds, delta) } };
+  }
   return { ...point, energy };
+}
+
+function shiftRatePoint(point: Point, index: number, delta: number): Point {
+  const e = point.energy;
+  if (e.mode !== 'estimate' || (e.estimate.method !== 'eyringFit' && e.estimate.method !== 'arrhenius')) return point;
+  const data = e.estimate.data.slice();
+  data[index] = { ...data[index]!, k: logNormalShift(data[index]!.k, delta) };
+  return { ...point, energy: { ...e, estimate: { ...e.estimate, data } } };
 }
 
 function shiftStructure(s: Structure, field: 'energy' | 'correction', delta: number, quantity: Document['settings']['quantity']): Structure {
@@ -22,7 +50,8 @@ function shiftSpecies(species: Species, delta: number): Species {
 }
 
 /**
- * An ordinary document with `deltas[i]` (in input i's own unit) added to input i. Only the
+ * An ordinary document with `deltas[i]` (in input i's own unit) added to input i — or, for a
+ * log-normal input (rate constant, half-life), applied by {@link logNormalShift}. Only the
  * objects on a changed path are copied; the original is not touched.
  */
 export function perturbDocument(doc: Document, inputs: readonly UncertainInput[], deltas: ArrayLike<number>): Document {
@@ -41,6 +70,9 @@ export function perturbDocument(doc: Document, inputs: readonly UncertainInput[]
     if (t.kind === 'point') {
       const list = pointsOf(t.pathway);
       list[t.point] = shiftPoint(list[t.point]!, t.field, d);
+    } else if (t.kind === 'ratePoint') {
+      const list = pointsOf(t.pathway);
+      list[t.point] = shiftRatePoint(list[t.point]!, t.index, d);
     } else if (t.kind === 'structure') {
       const s = species[t.species]!;
       const structures = s.structures.slice();

@@ -1,9 +1,14 @@
+import { rateUnit, type RateUnit } from '../kinetics/eyring.ts';
+import type { Molecularity } from '../kinetics/types.ts';
 import type { Document, Unit } from '../model/schema.ts';
 import { toJoulesPerMol, unitLabel } from '../units/energy.ts';
+import { rtJoules } from '../units/thermal.ts';
 
 /** Where a sampled deviation is added in the document. */
 export type InputTarget =
-  | { kind: 'point'; pathway: number; point: number; field: 'value' | 'lambda' | 'e0' }
+  | { kind: 'point'; pathway: number; point: number; field: 'value' | 'lambda' | 'e0' | 'k' | 'seconds' }
+  /** The k of point `index` of an Eyring-plot or Arrhenius estimate's data. */
+  | { kind: 'ratePoint'; pathway: number; point: number; index: number }
   | { kind: 'structure'; species: number; structure: number; field: 'energy' | 'correction' }
   | { kind: 'species'; species: number }
   | { kind: 'formation'; species: number; field: 'dfH' | 'dfG' };
@@ -16,16 +21,29 @@ export interface UncertainInput {
   label: string;
   /** σ in the unit the value was entered in. */
   sigma: number;
-  unit: Unit;
-  /** σ in J/mol. */
+  /** An energy unit, or a rate constant's or half-life's own unit. */
+  unit: Unit | RateUnit | 's';
+  /**
+   * σ as an energy in J/mol: σ itself for an energy; for a rate constant or half-life, RT·σ/value,
+   * the σ of the −RT ln k (or RT ln t½) it enters the Eyring equation as (RT at its temperature).
+   */
   sigmaJ: number;
+  /**
+   * How a deviate is applied: 'normal' adds z·σ; 'logNormal' (rate constants, half-lives, which
+   * must stay positive) multiplies by exp(z·σ/value), see `perturbDocument`.
+   */
+  distribution: 'normal' | 'logNormal';
   /** True when σ is the document's default, not one typed beside the value. */
   isDefault: boolean;
   target: InputTarget;
 }
 
 const make = (key: string, label: string, sigma: number, unit: Unit, isDefault: boolean, target: InputTarget): UncertainInput =>
-  ({ key, label, sigma, unit, sigmaJ: toJoulesPerMol(sigma, unit), isDefault, target });
+  ({ key, label, sigma, unit, sigmaJ: toJoulesPerMol(sigma, unit), distribution: 'normal', isDefault, target });
+
+/** A positive input (k, t½) with σ in its own unit, sampled log-normally. */
+const makePositive = (key: string, label: string, sigma: number, value: number, unit: RateUnit | 's', temperatureK: number, target: InputTarget): UncertainInput =>
+  ({ key, label, sigma, unit, sigmaJ: rtJoules(temperatureK) * (sigma / value), distribution: 'logNormal', isDefault: false, target });
 
 /** Is point `qi` of pathway `pi` a reference state (its typed value defines zero)? */
 function isReference(doc: Document, pi: number, qi: number): boolean {
@@ -44,6 +62,8 @@ function isReference(doc: Document, pi: number, qi: number): boolean {
  * default σ (settings.uncertainty.defaultSigma, off unless stated) applies to typed values
  * (not a reference state's, which defines zero), steps, barriers, each species' energy as a
  * whole, and formation values that carry no σ of their own; estimates only take explicit σ.
+ * Rate constants and half-lives (estimates and the (T, k) points of fits) are positive and
+ * listed as log-normal inputs.
  */
 export function uncertainInputs(doc: Document): UncertainInput[] {
   const out: UncertainInput[] = [];
@@ -56,7 +76,7 @@ export function uncertainInputs(doc: Document): UncertainInput[] {
     const e = point.energy;
     const key = `${pathway.id}/${point.id}`;
     const name = `${point.label || point.id} (${pathway.name || pathway.id})`;
-    const target = (field: 'value' | 'lambda' | 'e0'): InputTarget => ({ kind: 'point', pathway: pi, point: qi, field });
+    const target = (field: 'value' | 'lambda' | 'e0' | 'k' | 'seconds'): InputTarget => ({ kind: 'point', pathway: pi, point: qi, field });
     if (e.mode === 'value' || e.mode === 'step' || e.mode === 'barrier') {
       const what = e.mode === 'value' ? 'typed value' : e.mode;
       if (e.sigma !== undefined && e.sigma > 0) out.push(make(`${key}/value`, `${name}: ${what}`, e.sigma, e.unit, false, target('value')));
@@ -67,6 +87,14 @@ export function uncertainInputs(doc: Document): UncertainInput[] {
       const est = e.estimate;
       if (est.method === 'marcus' && est.lambdaSigma) out.push(make(`${key}/lambda`, `${name}: Marcus λ`, est.lambdaSigma, est.unit, false, target('lambda')));
       if (est.method === 'bep' && est.e0Sigma) out.push(make(`${key}/e0`, `${name}: BEP E₀`, est.e0Sigma, est.unit, false, target('e0')));
+      const tData = (est.method === 'rateConstant' || est.method === 'halfLife' ? est.temperatureK : undefined) ?? doc.settings.temperatureK;
+      if (est.method === 'rateConstant' && est.kSigma) out.push(makePositive(`${key}/k`, `${name}: rate constant k`, est.kSigma, est.k, rateUnit(est.molecularity as Molecularity), tData, target('k')));
+      if (est.method === 'halfLife' && est.secondsSigma) out.push(makePositive(`${key}/seconds`, `${name}: half-life`, est.secondsSigma, est.seconds, 's', tData, target('seconds')));
+      if (est.method === 'eyringFit' || est.method === 'arrhenius') {
+        est.data.forEach((p, index) => {
+          if (p.kSigma) out.push(makePositive(`${key}/data ${index}/k`, `${name}: k at ${p.temperatureK} K`, p.kSigma, p.k, 's⁻¹', p.temperatureK, { kind: 'ratePoint', pathway: pi, point: qi, index }));
+        });
+      }
     }
   }));
   doc.species.forEach((species, si) => {
@@ -94,7 +122,12 @@ export function uncertainInputs(doc: Document): UncertainInput[] {
   return out;
 }
 
+/** How an input's unit is written: an energy unit's label, or a rate constant's or half-life's unit as it is. */
+export function sigmaUnitLabel(unit: string): string {
+  return unit === 's' || unit.includes('s⁻¹') ? unit : unitLabel(unit as Unit);
+}
+
 /** "σ 1.0 kcal/mol" for messages. */
 export function describeSigma(input: UncertainInput): string {
-  return `σ ${input.sigma} ${unitLabel(input.unit)}${input.isDefault ? ' (default)' : ''}`;
+  return `σ ${input.sigma} ${sigmaUnitLabel(input.unit)}${input.isDefault ? ' (default)' : ''}`;
 }

@@ -57,7 +57,8 @@ export interface UncertaintyRun {
 
 /**
  * Monte Carlo propagation of the document's input uncertainties (normal deviates from a
- * seeded generator, σ as entered). Each sample is the document with perturbed inputs run
+ * seeded generator, σ as entered; rate constants and half-lives log-normal, see
+ * `logNormalShift`). Each sample is the document with perturbed inputs run
  * through `analyseDocument` — resolution, the TS-below rule, effective barrier, energetic
  * span, comparisons, selectivity — or, when every input enters the resolution linearly,
  * through `analyseResolved` on the profile from `linearResolution` (same resolver, same
@@ -99,7 +100,8 @@ export function startUncertainty(doc: Document, options: UncertaintyOptions = {}
     },
     result() {
       const n = done;
-      const quantityResults = quantities.map(({ read, ...rest }, k): QuantityResult => ({ ...rest, point: read(a0), interval: summarise(values[k]!.subarray(0, n)) }));
+      const scratch = new Float64Array(n);
+      const quantityResults = quantities.map(({ read, ...rest }, k): QuantityResult => ({ ...rest, point: read(a0), interval: summarise(values[k]!.subarray(0, n), scratch) }));
       const choiceResults = choices.map(({ read, ...rest }, k): ChoiceResult => ({ ...rest, point: read(a0), probabilities: frequencies(outcomes[k]!.slice(0, n)) }));
       const sensitivity: RateSensitivity[] = [];
       a0.pathways.forEach((pa) => {

@@ -1,9 +1,9 @@
-import { unitLabel, type EnergyUnit } from '../units/energy.ts';
+import { sigmaUnitLabel } from './uncertainInputs.ts';
 import type { ReportUncertainty } from './annotateReport.ts';
 
 /** "σ" of one input as entered, e.g. "1 kcal mol⁻¹". */
 export function sigmaText(input: ReportUncertainty['inputs'][number]): string {
-  return `${input.sigma} ${unitLabel(input.unit as EnergyUnit)}`;
+  return `${input.sigma} ${sigmaUnitLabel(input.unit)}`;
 }
 
 /**

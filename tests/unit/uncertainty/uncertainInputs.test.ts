@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { makeDocument, validateDocument } from '../../../core/model/load.ts';
 import { analyseDocument } from '../../../core/analysis/analyseDocument.ts';
-import { perturbDocument } from '../../../core/uncertainty/perturbDocument.ts';
-import { uncertainInputs } from '../../../core/uncertainty/uncertainInputs.ts';
+import { logNormalShift, perturbDocument } from '../../../core/uncertainty/perturbDocument.ts';
+import { describeSigma, uncertainInputs } from '../../../core/uncertainty/uncertainInputs.ts';
 import { onePathway, species, state, typed } from '../profile/builders.ts';
 
 describe('uncertainInputs', () => {
@@ -64,5 +64,35 @@ describe('schema: σ fields', () => {
   it('keeps the Monte Carlo settings and seed with the document', () => {
     const doc = makeDocument({ settings: { uncertainty: { seed: 77 } } });
     expect(doc.settings.uncertainty).toEqual({ defaultSigmaUnit: 'kcal/mol', samples: 10_000, seed: 77 });
+  });
+});
+
+describe('σ on rate constants and half-lives', () => {
+  const ts = (estimate: object) => ({ id: 'T', label: 'T', kind: 'ts' as const, energy: { mode: 'estimate' as const, estimate: estimate as never } });
+  const withEstimate = (estimate: object) => onePathway([typed('R', 'min', 0), ts(estimate), typed('P', 'min', -3)]);
+  const raw = (estimate: object) => ({ format: 'passline', version: 3, pathways: [{ id: 'a', name: 'A', points: [{ id: 'r', label: 'R', kind: 'min', energy: { mode: 'value', value: 0, unit: 'kcal/mol' } }, ts(estimate)] }] });
+
+  it('lists kSigma, secondsSigma and each point\'s kSigma as log-normal inputs in their own units', () => {
+    expect(uncertainInputs(withEstimate({ method: 'rateConstant', k: 2, kSigma: 0.5, molecularity: 2 })).map((i) => [i.key, i.sigma, i.unit, i.distribution])).toEqual([['a/T/k', 0.5, 'M⁻¹ s⁻¹', 'logNormal']]);
+    expect(uncertainInputs(withEstimate({ method: 'halfLife', seconds: 60, secondsSigma: 6 })).map(describeSigma)).toEqual(['σ 6 s']);
+    const fit = withEstimate({ method: 'arrhenius', data: [{ temperatureK: 300, k: 1, kSigma: 0.1 }, { temperatureK: 320, k: 3 }, { temperatureK: 340, k: 8, kSigma: 0 }] });
+    expect(uncertainInputs(fit).map((i) => [i.key, i.label])).toEqual([['a/T/data 0/k', 'T (A): k at 300 K']]);
+  });
+
+  it('perturbDocument multiplies by exp(δ/value) and copies only what it changes', () => {
+    const doc = withEstimate({ method: 'eyringFit', data: [{ temperatureK: 300, k: 1, kSigma: 0.1 }, { temperatureK: 320, k: 3, kSigma: 0.3 }] });
+    const moved = perturbDocument(doc, uncertainInputs(doc), [0.2, -0.3]);
+    const est = moved.pathways[0]!.points[1]!.energy;
+    expect(est.mode === 'estimate' && est.estimate.method === 'eyringFit' && est.estimate.data.map((p) => p.k)).toEqual([Math.exp(0.2), 3 * Math.exp(-0.1)]);
+    expect(doc.pathways[0]!.points[1]!.energy).toMatchObject({ estimate: { data: [{ k: 1 }, { k: 3 }] } });
+    expect(logNormalShift(5, 0)).toBe(5);
+  });
+
+  it('refuses a negative σ or one beyond ten times the value, naming the field and the bound', () => {
+    const neg = validateDocument(raw({ method: 'halfLife', seconds: 10, secondsSigma: -1 }));
+    expect(!neg.ok && neg.errors[0]).toMatchObject({ path: 'pathways[0].points[1].energy.estimate.secondsSigma', message: 'expected a standard uncertainty ≥ 0 in s' });
+    const big = validateDocument(raw({ method: 'eyringFit', data: [{ temperatureK: 300, k: 1 }, { temperatureK: 310, k: 2, kSigma: 200 }] }));
+    expect(!big.ok && big.errors[0]).toMatchObject({ path: 'pathways[0].points[1].energy.estimate.data[1].kSigma', message: 'kSigma 200 with k 2: relative uncertainty σ/value 100 is outside 0 to 10' });
+    expect(validateDocument(raw({ method: 'rateConstant', k: 1e-3, kSigma: 1e-4 })).ok).toBe(true);
   });
 });

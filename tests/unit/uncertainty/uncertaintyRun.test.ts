@@ -160,3 +160,18 @@ describe('uncertainty: the fast path is the full pipeline', () => {
     expect([k.low, k.high]).toEqual([k.point, k.point]);
   });
 });
+
+describe('uncertainty: the fast path keeps what the analysis reads from the resolved profile', () => {
+  it('pathways that do not share a zero get no selectivity in either path (the fast path kept no scale key)', () => {
+    // Per-pathway zeros (reference "first"); B's first state is typed 2, not 0, so B keeps a zero of
+    // its own (referenceFrame: scale key "pathway:B") and competingPathways refuses the selectivity.
+    const pathway = (id: string, start: number, ts: number) => ({ id, name: id, points: [typed('R', 'min', start), withSigma('TS', 'ts', ts, 1), typed('P', 'min', -10)] });
+    const doc = makeDocument({ settings: { reference: { kind: 'first' } }, pathways: [pathway('A', 0, 15), pathway('B', 2, 17)], comparisons: [{ type: 'selectivity', pathways: ['A', 'B'] }] });
+    const fast = analyseUncertainty(doc, { samples: 50, seed: 1 });
+    const full = analyseUncertainty(doc, { samples: 50, seed: 1, full: true });
+    expect(fast.method).toBe('linear-resolution');
+    const major = (r: UncertaintyResult) => r.choices.find((c) => c.key === 'comparison 0/major')!;
+    expect([major(full).point, major(full).probabilities]).toEqual([null, {}]);
+    expect([major(fast).point, major(fast).probabilities]).toEqual([null, {}]);
+  });
+});

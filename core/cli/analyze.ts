@@ -7,7 +7,7 @@ import { applySettingOptions } from './options.ts';
 import { analysisReport } from '../report/analysisReport.ts';
 import { analysisText } from '../report/analysisText.ts';
 import { documentFindings, findingCounts } from './documentFindings.ts';
-import { analyseUncertainty } from '../uncertainty/uncertaintyRun.ts';
+import { monteCarlo } from './monteCarlo.ts';
 import { annotateReport } from '../uncertainty/annotateReport.ts';
 import { uncertaintyText } from '../uncertainty/uncertaintyText.ts';
 
@@ -35,7 +35,7 @@ export async function runAnalyze(file: string, options: AnalyzeOptions, io: CliI
   if (run === undefined) {
     io.out(options.json ? `${JSON.stringify(report, null, 2)}\n` : `${analysisText(report)}\n${summary}\n`);
   } else {
-    const annotated = annotateReport(report, analyseUncertainty(doc, run));
+    const annotated = annotateReport(report, monteCarlo(doc, run));
     io.out(options.json ? `${JSON.stringify(annotated, null, 2)}\n` : `${analysisText(report)}${uncertaintyText(annotated)}\n${summary}\n`);
   }
   const errors = report.checks.filter((f) => f.severity === 'error').length;

@@ -36,7 +36,6 @@ const COMMANDS: Record<string, { options: Record<string, OptionSpec>; run: Comma
   analyze: {
     options: { json: { type: 'boolean' }, unit: { type: 'string' }, temperature: { type: 'string' }, strict: { type: 'boolean' }, uncertainty: { type: 'string' }, seed: { type: 'string' } },
     args: 1,
-    long: (_, v) => v.uncertainty !== undefined,
     run: async ([file], v, io) => (await import('./analyze.ts')).runAnalyze(file!, { json: v.json as boolean | undefined, unit: v.unit as string | undefined, temperature: v.temperature as string | undefined, strict: v.strict as boolean | undefined, uncertainty: v.uncertainty as string | undefined, seed: v.seed as string | undefined }, io),
   },
   thermo: {

@@ -18,7 +18,6 @@ import { readBundledFont } from './fontFile.ts';
 import { writeOutput } from './writeOutput.ts';
 import { documentFindings } from './documentFindings.ts';
 import { noteLargeWork } from './largeWork.ts';
-import { expectLongWork } from './compilerTier.ts';
 import { missingGlyphs, missingGlyphsMessage } from '../export/missingGlyphs.ts';
 
 export interface RenderCliOptions {
@@ -88,7 +87,6 @@ export async function runRender(file: string, options: RenderCliOptions, io: Cli
 
 /** The error bars of the document's Monte Carlo run; its modules load only when bars are asked for. */
 async function monteCarloErrorBars(doc: Document, bars: NonNullable<Document['figure']['errorBars']>) {
-  expectLongWork();
-  const [{ analyseUncertainty }, { errorBarRanges }] = await Promise.all([import('../uncertainty/uncertaintyRun.ts'), import('../uncertainty/errorBarRanges.ts')]);
-  return errorBarRanges(analyseUncertainty(doc), bars);
+  const [{ monteCarlo }, { errorBarRanges }] = await Promise.all([import('./monteCarlo.ts'), import('../uncertainty/errorBarRanges.ts')]);
+  return errorBarRanges(monteCarlo(doc), bars);
 }

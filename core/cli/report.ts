@@ -14,7 +14,7 @@ import { missingGlyphs, missingGlyphsMessage } from '../export/missingGlyphs.ts'
 import { readFontMetrics } from '../figure/font/fontMetrics.ts';
 import { energyDecimals } from '../format/energyDecimals.ts';
 import { annotateReport } from '../uncertainty/annotateReport.ts';
-import { analyseUncertainty } from '../uncertainty/uncertaintyRun.ts';
+import { monteCarlo } from './monteCarlo.ts';
 import { uncertaintyOptions, type UncertaintyCliOptions } from './uncertaintyOptions.ts';
 
 export interface ReportCliOptions extends UncertaintyCliOptions { output?: string | undefined; unit?: string | undefined; temperature?: string | undefined }
@@ -36,7 +36,7 @@ export async function runReport(file: string, options: ReportCliOptions, io: Cli
   const doc = applySettingOptions(loadInput(file, io), options);
   noteLargeWork('report', doc, io);
   const fontBytes = readBundledFont();
-  const uncertainty = asked || doc.figure.errorBars ? analyseUncertainty(doc, asked ?? {}) : undefined;
+  const uncertainty = asked || doc.figure.errorBars ? monteCarlo(doc, asked ?? {}) : undefined;
   await writeOutput(output, await renderReport(doc, { fontBytes, uncertainty }), io);
   const metrics = readFontMetrics(fontBytes);
   const glyphs = missingGlyphsMessage(missingGlyphs(doc, metrics), metrics.family, 'report');
@@ -49,6 +49,6 @@ export async function runTables(file: string, options: ReportCliOptions, io: Cli
   const asked = uncertaintyOptions(options);
   const doc = applySettingOptions(loadInput(file, io), options);
   const report = analysisReport(doc, analyseDocument(doc));
-  const tables = analysisTables(asked ? annotateReport(report, analyseUncertainty(doc, asked)) : report, energyDecimals(doc.settings, doc.settings.unit));
+  const tables = analysisTables(asked ? annotateReport(report, monteCarlo(doc, asked)) : report, energyDecimals(doc.settings, doc.settings.unit));
   await writeOutput(output, extname(output).toLowerCase() === '.md' ? tablesToMarkdown(tables, doc.title) : tablesToCsv(tables), io);
 }

@@ -20,7 +20,9 @@ describe('the bundled CLI and V8 optimising compiler', { timeout: 60_000 }, () =
     expect(turbofanCompiles(['analyze', 'tests/bench/smallProfile.csv', '--json'])).toBe(0);
   });
 
-  it('a Monte Carlo run (analyze --uncertainty) turns it back on, so its hot loop is optimised', () => {
+  it('a Monte Carlo run (analyze or tables --uncertainty, through monteCarlo.ts) turns it back on, so its hot loop is optimised', () => {
     expect(turbofanCompiles(['analyze', 'tests/bench/smallProfile.csv', '--uncertainty', '3000', '--json'])).toBeGreaterThan(0);
+    const tables = join(mkdtempSync(join(tmpdir(), 'passline-tier-')), 't.md');
+    expect(turbofanCompiles(['tables', 'tests/bench/smallProfile.csv', '-o', tables, '--uncertainty', '3000'])).toBeGreaterThan(0);
   });
 });

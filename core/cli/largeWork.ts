@@ -3,13 +3,15 @@ import type { Document } from '../model/schema.ts';
 import type { CliIo } from './io.ts';
 import { expectLongWork } from './compilerTier.ts';
 
+const pointCount = (doc: Document) => doc.pathways.reduce((n, p) => n + p.points.length, 0);
+
 /**
  * Says on stderr, before the work starts, that a document beyond the usual number of points
  * will take a while (up to the hard limit it still runs; see BOUNDS.pointCount), and lets
  * V8 optimise for it (compilerTier.ts).
  */
 export function noteLargeWork(command: string, doc: Document, io: CliIo): void {
-  const points = doc.pathways.reduce((n, p) => n + p.points.length, 0);
+  const points = pointCount(doc);
   if (points > BOUNDS.pointCount.usual[1]) {
     expectLongWork();
     io.err(`passline ${command}: ${points} points (more than the usual ${BOUNDS.pointCount.usual[1]}); this may take a while…\n`);
@@ -21,7 +23,6 @@ export function noteLargeWork(command: string, doc: Document, io: CliIo): void {
  * progress lines on stderr as long work advances; undefined for ordinary documents.
  */
 export function largeWorkProgress(command: string, doc: Document, io: CliIo, what: string): ((done: number, total: number) => void) | undefined {
-  const points = doc.pathways.reduce((n, p) => n + p.points.length, 0);
-  if (points <= BOUNDS.pointCount.usual[1]) return undefined;
+  if (pointCount(doc) <= BOUNDS.pointCount.usual[1]) return undefined;
   return (done, total) => io.err(`passline ${command}: ${done}/${total} ${what}\n`);
 }

@@ -13,7 +13,7 @@ async function run(argv: string[], doc = DOC) {
   return { code: await main(argv, io), err, files };
 }
 
-describe('passline tables / report --uncertainty', () => {
+describe('passline tables / report --uncertainty', { timeout: 30_000 }, () => { // Monte Carlo runs on a shared 2-core machine
   it('tables adds median and 95 % columns and states N, seed and σ; the same seed gives the same file', async () => {
     const a = await run(['tables', 'x.passline', '-o', 't.md', '--uncertainty', '500', '--seed', '9']);
     expect(a.code).toBe(0);

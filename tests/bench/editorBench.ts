@@ -7,15 +7,19 @@
  * deliver the move at the next frame), with the floor of the measure (a frame wait with no
  * work) and the main-thread work per move beside them; and the time from load to an
  * interactive canvas: the demo (issue 15 target < 1.5 s; median of fresh loads, each in its
- * own browser context so nothing is cached) and the 10 × 50 document (target < 2 s). Prints
- * numbers; not a test.
+ * own browser context so nothing is cached) and the 10 × 50 document (target < 2 s). The
+ * pages are served by the desktop app's own file handler (electron/appProtocol.ts) from an
+ * HTTP server inside this process, as the app serves them from disk, not by vite preview (a
+ * second Node process on this two-core machine, which the app never has). Prints numbers;
+ * not a test.
  */
 import { chromium, type Browser } from '@playwright/test';
-import { spawn } from 'node:child_process';
+import { createServer, type Server } from 'node:http';
 import { existsSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { crowdedDocumentText } from '../fixtures/crowdedDocument.ts';
+import { APP_SCHEME, serveAppFile } from '../../electron/appProtocol.ts';
 
 // PASSLINE_BENCH_PORT lets two checkouts run the benchmark side by side.
 const PORT = Number(process.env.PASSLINE_BENCH_PORT ?? 4176);
@@ -24,12 +28,18 @@ const URL_ = `http://127.0.0.1:${PORT}/`;
 const DEMO_LOADS = 7;
 const quantile = (xs: number[], q: number) => { const s = [...xs].sort((a, b) => a - b); return s[Math.min(s.length - 1, Math.floor(q * s.length))] ?? NaN; };
 
-async function waitForServer(): Promise<void> {
-  for (let i = 0; i < 100; i++) {
-    try { if ((await fetch(URL_)).ok) return; } catch { /* not up yet */ }
-    await new Promise((r) => setTimeout(r, 100));
-  }
-  throw new Error(`vite preview did not answer on ${URL_}`);
+/** Serves dist/renderer over HTTP with the desktop app's handler of its own scheme. */
+async function serveRenderer(): Promise<Server> {
+  const root = 'dist/renderer';
+  const server = createServer((req, res) => {
+    const path = req.url === '/' ? '/index.html' : (req.url ?? '/');
+    void serveAppFile(root, `${APP_SCHEME}://app${path}`).then(async (answer) => {
+      res.writeHead(answer.status, Object.fromEntries(answer.headers));
+      res.end(Buffer.from(await answer.arrayBuffer()));
+    });
+  });
+  await new Promise<void>((ok, fail) => { server.once('error', fail); server.listen(PORT, '127.0.0.1', ok); });
+  return server;
 }
 
 /**
@@ -56,9 +66,8 @@ async function tracedLoadCpu(browser: Browser): Promise<number> {
 
 async function main(): Promise<void> {
   if (!existsSync('dist/renderer/index.html')) throw new Error('build the renderer first: npx vite build');
-  const server = spawn('npx', ['vite', 'preview', '--host', '127.0.0.1', '--port', String(PORT), '--strictPort', '--bypass-lock'], { stdio: ['ignore', 'ignore', 'inherit'], detached: true });
+  const server = await serveRenderer();
   try {
-    await waitForServer();
     const browser = await chromium.launch({
       executablePath: existsSync('/usr/bin/chromium') ? '/usr/bin/chromium' : undefined,
       args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run'],
@@ -135,7 +144,7 @@ async function main(): Promise<void> {
     console.log(`  same measure with no work (frame wait floor):   median ${quantile(idle, 0.5).toFixed(1)} ms, p95 ${quantile(idle, 0.95).toFixed(1)} ms`);
     console.log(`  main-thread work per move (${work.length} moves shown ahead):  median ${quantile(work, 0.5).toFixed(1)} ms, p95 ${quantile(work, 0.95).toFixed(1)} ms`);
   } finally {
-    try { if (server.pid) process.kill(-server.pid); } catch { /* already gone */ }
+    server.close();
   }
 }
 

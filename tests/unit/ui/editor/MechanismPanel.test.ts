@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { fireEvent, render, screen, within } from '@testing-library/svelte';
 import MechanismPanel from '../../../../ui/editor/MechanismPanel.svelte';
 import { routeStore } from './storeFixture.ts';
+import { insertPathway } from '../../../../core/edit/pathwayEdits.ts';
 
 /** The mechanism row whose label field holds `label`. */
 const rowOf = (label: string) => screen.getAllByRole('row').find((r) => (within(r).queryAllByRole('textbox')[0] as HTMLInputElement | undefined)?.value === label)!;
@@ -59,5 +60,27 @@ describe('MechanismPanel', () => {
     expect(store.doc.pathways[0]!.style.visible).toBe(false);
     await fireEvent.click(screen.getByRole('button', { name: 'Add pathway' }));
     expect(screen.getByRole('region', { name: 'Pathway Pathway 2' })).toBeTruthy();
+  });
+
+  it('at start-up builds no pathway until told, then one per task; later pathways appear at once', async () => {
+    const store = routeStore();
+    store.apply(insertPathway(store.doc));
+    store.apply(insertPathway(store.doc));
+    const deferred = render(MechanismPanel, { store, pathwaysShown: false });
+    const pathways = () => screen.queryAllByRole('region').map((r) => r.getAttribute('aria-label')).filter((name) => name?.startsWith('Pathway '));
+    const nextTask = () => new Promise((r) => setTimeout(r, 0));
+    await nextTask();
+    expect(pathways()).toEqual([]);
+    expect(screen.getByText('Loading the pathways…')).toBeTruthy();
+    await deferred.rerender({ store, pathwaysShown: true });
+    await nextTask();
+    expect(pathways()).toEqual(['Pathway Route']);
+    expect(screen.getByText('Loading the other pathways…')).toBeTruthy();
+    await nextTask();
+    await nextTask();
+    expect(pathways()).toEqual(['Pathway Route', 'Pathway Pathway 2', 'Pathway Pathway 3']);
+    expect(screen.queryByText(/Loading/)).toBeNull();
+    await fireEvent.click(screen.getByRole('button', { name: 'Add pathway' }));
+    expect(pathways()).toHaveLength(4);
   });
 });

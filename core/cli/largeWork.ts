@@ -26,3 +26,21 @@ export function largeWorkProgress(command: string, doc: Document, io: CliIo, wha
   if (pointCount(doc) <= BOUNDS.pointCount.usual[1]) return undefined;
   return (done, total) => io.err(`passline ${command}: ${done}/${total} ${what}\n`);
 }
+
+/** Seconds of silence before the first progress line, and between lines. */
+const PROGRESS_EVERY_MS = 1000;
+
+/**
+ * A reporter for work whose length shows only as it runs (a stiff simulation): a line on
+ * stderr with the share of `what` done, once the work has run a second, then at most once a
+ * second, so quick runs print nothing. `now` is the clock (tests pass their own).
+ */
+export function timedProgress(command: string, io: CliIo, what: string, now: () => number = Date.now): (done: number, total: number) => void {
+  let last = now();
+  return (done, total) => {
+    const t = now();
+    if (t - last < PROGRESS_EVERY_MS) return;
+    last = t;
+    io.err(`passline ${command}: ${Math.floor((100 * done) / total)} % of ${what} done\n`);
+  };
+}

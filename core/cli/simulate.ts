@@ -14,6 +14,7 @@ import { significant } from './significant.ts';
 import { loadInput } from './loadInput.ts';
 import { applySettingOptions, boundedOption } from './options.ts';
 import { outsideHard } from '../model/bounds.ts';
+import { timedProgress } from './largeWork.ts';
 
 export interface SimulateCliOptions {
   species?: boolean | undefined;
@@ -65,7 +66,8 @@ export function runSimulate(file: string, options: SimulateCliOptions, io: CliIo
     initial[network.species[0]!] = 1;
   }
   // The solver stops at every output time, so its step budget grows with the rows asked for.
-  const outcome = simulate(network, initial, { until, points, maxSteps: 100_000 + 4 * points });
+  const onProgress = timedProgress('simulate', io, 'the output times');
+  const outcome = simulate(network, initial, { until, points, maxSteps: 100_000 + 4 * points, onProgress });
   if (!outcome.ok) throw new CliError(outcome.errors.map((e) => `${e.path}: ${e.message}`).join('; '));
   const s = outcome.simulation;
   // Species mode reads progress from the overall roles; a pathway chain, from its first minimum.

@@ -42,7 +42,7 @@ export function simulate(network: MassActionNetwork, initial: Record<string, num
   const nonNegative = y0.map((_, i) => i !== compiled.tallyIndex);
   const laws = conservationLaws(compiled.netChanges, compiled.speciesCount);
   const project = invariantProjection(laws, c0, c0.map(() => atol));
-  const run = integrate(compiled.rhs, compiled.jacobian, y0, 0, until, { rtol, atol, outputTimes: solverTimes, nonNegative, maxSteps: options.maxSteps, project });
+  const run = integrate(compiled.rhs, compiled.jacobian, y0, 0, until, { rtol, atol, outputTimes: solverTimes, nonNegative, maxSteps: options.maxSteps, project, onOutput: options.onProgress });
   if (!run.ok) return { ok: false, errors: [{ path: 'solver', message: `${run.error.message} (${run.error.code}); try a looser tolerance or a shorter time` }] };
   const keep = run.times.map((t) => grid.includes(t));
   const times = run.times.filter((_, k) => keep[k]);

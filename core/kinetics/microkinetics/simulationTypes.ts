@@ -21,6 +21,8 @@ export interface SimulateOptions {
   /** Last fraction of the run over which the turnover slope is read (default 0.2). */
   tofWindow?: number;
   maxSteps?: number;
+  /** Called as the run advances, with how many of the solver's output times are done. */
+  onProgress?: (done: number, total: number) => void;
 }
 
 /** Concentrations vs time; concentrations[k][i] is species i at times[k], mol/L. */

@@ -22,6 +22,8 @@ export interface IntegrateOptions {
   nonNegative?: boolean | readonly boolean[];
   /** Called on every accepted state (after clipping), e.g. to project it back onto conservation laws; may change y in place. */
   project?: (y: Float64Array) => void;
+  /** With `outputTimes`: called each time the solution reaches output times, with how many of them are done. */
+  onOutput?: (done: number, total: number) => void;
 }
 
 /** Work counters of one integration. */

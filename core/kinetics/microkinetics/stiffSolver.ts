@@ -88,7 +88,9 @@ export function integrate(
       // A step shortened to land on an output time says nothing against the longer step.
       h = Math.min(maxStep, landing ? Math.max(h, hTry * factor) : hTry * factor);
       if (!outputTimes) record();
+      const before = next;
       while (outputTimes && next < outputTimes.length && outputTimes[next]! <= t) { record(); next++; }
+      if (outputTimes && next > before) options.onOutput?.(next, outputTimes.length);
     } else {
       stats.rejectedSteps++;
       lastRejected = true;

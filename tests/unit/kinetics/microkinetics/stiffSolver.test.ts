@@ -63,6 +63,16 @@ describe('integrate', () => {
     expect(run.states.at(-1)![0]! / Math.exp(-5)).toBeCloseTo(1, 6); // exact e^(−t)
   });
 
+  it('says how many output times are done as it reaches them, ending at all of them', () => {
+    const outputTimes = [0, 0.5, 1, 2, 4, 5];
+    const calls: [number, number][] = [];
+    const run = integrate((y, d) => { d[0] = -y[0]!; }, (_y, j) => { j[0] = -1; }, [1], 0, 5, { rtol: 1e-8, outputTimes, onOutput: (done, total) => calls.push([done, total]) });
+    expect(run.ok).toBe(true);
+    expect(calls.length).toBeGreaterThan(1);
+    for (let k = 1; k < calls.length; k++) expect(calls[k]![0]).toBeGreaterThan(calls[k - 1]![0]);
+    expect(calls.at(-1)).toEqual([6, 6]);
+  });
+
   it('keeps concentrations non-negative when asked', () => {
     const run = integrate(robertsonRhs, robertsonJacobian, [1, 0, 0], 0, 4e10, { rtol: 1e-3, atol: 1e-3, nonNegative: true });
     expect(run.ok).toBe(true);

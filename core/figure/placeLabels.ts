@@ -26,6 +26,11 @@ export interface LabelRequest {
    * obstacle lies between; any other spot needs a leader line that crosses no label.
    */
   own?: readonly Box[];
+  /**
+   * Boxes drawn as part of those levels (their error bars, also listed in `Obstacles.bars`):
+   * a spot next to them is next to its level, as beside `own`; leaders still start at a bar of `own`.
+   */
+  attached?: readonly Box[];
   /** How far along its line a label may move and still count as next to its level (default h). */
   nearMm?: number;
   /** A spot whose box lies farther than this from its nearest own bar needs a leader line (default: no limit). */
@@ -121,21 +126,27 @@ function cheapest(r: LabelRequest, bounds: Box, gap: number, step: number, at: S
  * must cross no placed label.
  */
 function ownLevelJudge(r: LabelRequest, own: readonly Box[], gap: number, hard: BoxIndex, bars: BoxIndex, texts: BoxIndex): { cost: SpotJudge; leader: (box: Box, distance: number) => Leader | undefined } {
-  const mine = new Set(own);
+  const parts = r.attached && r.attached.length > 0 ? [...own, ...r.attached] : own;
+  const mine = new Set(parts);
   const leaderFor = (box: Box, distance: number): Leader | undefined | null => {
-    let nearest = own[0]!;
-    let ownD = Infinity;
-    for (const b of own) {
-      const d = boxDistance(box, b);
-      if (d < ownD) [ownD, nearest] = [d, b];
-    }
+    const nearestOf = (boxes: readonly Box[]) => {
+      let best = boxes[0]!;
+      let bestD = Infinity;
+      for (const b of boxes) {
+        const d = boxDistance(box, b);
+        if (d < bestD) [bestD, best] = [d, b];
+      }
+      return { box: best, d: bestD };
+    };
+    const { box: nearestPart, d: ownD } = nearestOf(parts);
     let next = distance <= (r.nearMm ?? r.h) && ownD <= (r.farMm ?? Infinity);
     if (next) next = !bars.touching(growBox(box, ownD)).some((b) => !mine.has(b) && boxDistance(box, b) < ownD - 1e-3);
     if (next) {
-      const gapBox = between(box, nearest, gap);
+      const gapBox = between(box, nearestPart, gap);
       if (gapBox) next = !hard.touching(gapBox).some((b) => !mine.has(b));
     }
     if (next) return undefined;
+    const nearest = parts === own ? nearestPart : nearestOf(own).box;
     const x0 = nearest.x + nearest.w / 2;
     const y0 = nearest.y + nearest.h / 2;
     const x1 = Math.min(Math.max(x0, box.x), box.x + box.w);

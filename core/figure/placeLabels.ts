@@ -65,6 +65,16 @@ export interface Obstacles {
 
 /** Extra cost of a spot that needs a leader line, in label heights (our tuning). */
 const LEADER_COST = 1.5;
+/**
+ * Where along a half bar a leader starts when the level has an error bar through its centre
+ * (our choice): well past the cap, whose half width is at most half the bar's (errorBars.ts),
+ * and short of the bar's end, where connectors leave.
+ */
+const LEADER_OFFSET = 0.8;
+
+function overlapsBox(b: Box, x: number, y: number, w: number, h: number): boolean {
+  return b.x < x + w && x < b.x + b.w && b.y < y + h && y < b.y + b.h;
+}
 
 /**
  * Greedy, deterministic placement: labels are taken in the order given; each looks at
@@ -147,12 +157,20 @@ function ownLevelJudge(r: LabelRequest, own: readonly Box[], gap: number, hard: 
     }
     if (next) return undefined;
     const nearest = parts === own ? nearestPart : nearestOf(own).box;
-    const x0 = nearest.x + nearest.w / 2;
+    const centre = nearest.x + nearest.w / 2;
     const y0 = nearest.y + nearest.h / 2;
-    const x1 = Math.min(Math.max(x0, box.x), box.x + box.w);
-    const y1 = Math.min(Math.max(y0, box.y), box.y + box.h);
-    const crosses = eachPiece([{ op: 'M', x: x0, y: y0 }, { op: 'L', x: x1, y: y1 }], 0, 8, (x, y, w, h) => texts.hitsAt(x, y, w, h, gap));
-    return crosses ? null : { x0, y0, x1, y1 };
+    // A leader from the bar's centre would run along the level's own error bar: start it
+    // part way to the bar's end instead, on the label's side first.
+    const toward = Math.sign(box.x + box.w / 2 - centre) || 1;
+    const starts = parts === own ? [centre] : [centre, centre + toward * LEADER_OFFSET * nearest.w / 2, centre - toward * LEADER_OFFSET * nearest.w / 2];
+    for (const x0 of starts) {
+      const x1 = Math.min(Math.max(x0, box.x), box.x + box.w);
+      const y1 = Math.min(Math.max(y0, box.y), box.y + box.h);
+      const line = [{ op: 'M' as const, x: x0, y: y0 }, { op: 'L' as const, x: x1, y: y1 }];
+      if (parts !== own && eachPiece(line, 0, 8, (x, y, w, h) => r.attached!.some((b) => overlapsBox(b, x, y, w, h)))) continue;
+      return eachPiece(line, 0, 8, (x, y, w, h) => texts.hitsAt(x, y, w, h, gap)) ? null : { x0, y0, x1, y1 };
+    }
+    return null;
   };
   return {
     cost: (x, y, distance) => {

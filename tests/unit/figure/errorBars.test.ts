@@ -9,6 +9,7 @@ import type { Document } from '../../../core/model/schema.ts';
 import { onePathway, typed } from '../profile/builders.ts';
 import { fontMetrics } from './fontFixture.ts';
 import { paths, texts } from './sceneQueries.ts';
+import { corpusErrorBars, FIGURE_CORPUS } from '../../fixtures/figureCorpus.ts';
 
 /** J/mol per kcal/mol (thermochemical calorie, 4.184 J: ISO 80000-5). */
 const kcal = 4184;
@@ -96,6 +97,24 @@ describe('error bars drawn by layoutFigure', () => {
         for (const piece of straightPieces(bar)) for (const box of labels) expect(overlaps(piece, box), `${bar.point} ${preset}`).toBe(false);
       }
     }
+  });
+});
+
+describe('leaders of levels with error bars', () => {
+  it('start on the bar away from its error bar, never running along it (follow-up: leaders from the bar centre lay on the whisker)', () => {
+    let checked = 0;
+    for (const e of FIGURE_CORPUS.slice(0, 12)) {
+      const scene = layoutFigure(resolveProfile(e.doc), e.doc, { metrics, preset: 'single', errorBars: corpusErrorBars(e.doc) });
+      const bars = paths(scene, 'errorBar');
+      for (const leader of paths(scene, 'leader').filter((l) => l.point !== undefined)) {
+        const own = bars.filter((b) => b.pathway === leader.pathway && b.point === leader.point);
+        if (own.length === 0) continue;
+        checked++;
+        const [a] = leader.segments as { x: number }[];
+        for (const bar of own) expect(Math.abs(a!.x - ends(bar).x), e.name).toBeGreaterThan(bar.stroke!.widthMm);
+      }
+    }
+    expect(checked).toBeGreaterThan(0);
   });
 });
 

@@ -2,29 +2,11 @@ import { describe, expect, it } from 'vitest';
 import { auditCounts, auditScene } from '../../../core/figure/audit/auditScene.ts';
 import { layoutFigure } from '../../../core/figure/layoutFigure.ts';
 import { resolveProfile } from '../../../core/profile/resolve.ts';
-import { FIGURE_CORPUS } from '../../fixtures/figureCorpus.ts';
+import { corpusErrorBars, FIGURE_CORPUS } from '../../fixtures/figureCorpus.ts';
 import { fontMetrics } from './fontFixture.ts';
-import { errorBarKey, type ErrorBarRanges } from '../../../core/figure/errorBars.ts';
-import type { Document } from '../../../core/model/schema.ts';
 
 const metrics = fontMetrics();
 const ZERO = { crossings: 0, overlaps: 0, misread: 0, offPage: 0, legendOverContent: 0 };
-
-/**
- * Error bars on every level with a known energy: ± a tenth of the document's energy span,
- * and ± a quarter on every third level (wide 95 % bars), so bars reach past their
- * neighbours, the plot's ends and the labels' usual spots.
- */
-function corpusBars(doc: Document): ErrorBarRanges {
-  const profile = resolveProfile(doc);
-  const levels = profile.pathways.flatMap((p) => p.points.flatMap((q) => (q.energyJ === null ? [] : [{ key: errorBarKey(p.id, q.id), e: q.energyJ }])));
-  const es = levels.map((l) => l.e);
-  const span = Math.max(...es) - Math.min(...es) || 1;
-  return new Map(levels.map((l, k) => {
-    const half = (k % 3 === 2 ? 0.25 : 0.1) * span;
-    return [l.key, { low: l.e - half, high: l.e + half }] as const;
-  }));
-}
 
 describe('the figure corpus (issue 11)', () => {
   it('holds at least 30 invented documents of 2–4 pathways', () => {
@@ -64,7 +46,7 @@ describe('the figure corpus (issue 11)', () => {
     for (const theme of ['colour', 'greyscale'] as const) {
       it(`audits clean with error bars on every level in every document (${preset}, ${theme})`, { timeout: 60_000 }, () => {
         for (const e of FIGURE_CORPUS) {
-          const bars = corpusBars(e.doc);
+          const bars = corpusErrorBars(e.doc);
           const scene = layoutFigure(resolveProfile(e.doc), e.doc, { metrics, preset, theme, errorBars: bars });
           expect(scene.items.filter((i) => i.role === 'errorBar').length, e.name).toBe(bars.size);
           const audit = auditScene(scene);

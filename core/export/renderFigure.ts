@@ -1,5 +1,5 @@
 import { readFontMetrics, type FontMetrics } from '../figure/font/fontMetrics.ts';
-import { addErrorBars, type ErrorBarRanges } from '../figure/errorBars.ts';
+import type { ErrorBarRanges } from '../figure/errorBars.ts';
 import { layoutFigure } from '../figure/layoutFigure.ts';
 import type { Preset } from '../figure/presets.ts';
 import type { ThemeName } from '../figure/themes.ts';
@@ -63,7 +63,7 @@ export async function renderFigure(profile: ResolvedProfile, doc: Document, opti
   const problem = checkRenderOptions(options);
   if (problem) throw new RangeError(`renderFigure: ${problem}`);
   const metrics = options.metrics ?? readFontMetrics(options.fontBytes);
-  const laidOut = layoutFigure(profile, doc, {
+  const scene = layoutFigure(profile, doc, {
     metrics,
     ...(options.preset ? { preset: options.preset } : {}),
     ...(options.theme ? { theme: options.theme } : {}),
@@ -71,8 +71,8 @@ export async function renderFigure(profile: ResolvedProfile, doc: Document, opti
     ...(options.heightMm !== undefined ? { heightMm: options.heightMm } : {}),
     ...(options.autoSubscript !== undefined ? { autoSubscript: options.autoSubscript } : {}),
     ...(options.structures ? { structures: options.structures } : {}),
+    ...(options.errorBars ? { errorBars: options.errorBars } : {}),
   });
-  const scene = options.errorBars ? addErrorBars(laidOut, profile, options.errorBars) : laidOut;
   options.onScene?.(scene);
   if (options.format === 'pdf') {
     // Loaded on demand: jsPDF is most of the code an SVG or PNG export would otherwise load.

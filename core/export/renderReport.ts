@@ -16,7 +16,6 @@ import type { FontSubsetter } from './sceneToPdf.ts';
 import { sceneText } from './sceneText.ts';
 import { toBase64 } from './toBase64.ts';
 import { safeText } from '../format/safeText.ts';
-import { addErrorBars } from '../figure/errorBars.ts';
 import { annotateReport } from '../uncertainty/annotateReport.ts';
 import { errorBarRanges } from '../uncertainty/errorBarRanges.ts';
 import type { UncertaintyResult } from '../uncertainty/uncertaintyRun.ts';
@@ -48,14 +47,14 @@ export async function renderReport(doc: Document, options: ReportOptions): Promi
   const metrics = readFontMetrics(options.fontBytes);
   const analysis = analyseDocument(doc);
   const report = analysisReport(doc, analysis);
-  const laidOut = layoutFigure(analysis.profile, doc, {
+  const run = options.uncertainty;
+  const bars = run && doc.figure.errorBars ? errorBarRanges(run, doc.figure.errorBars) : undefined;
+  const scene = layoutFigure(analysis.profile, doc, {
     metrics, preset: options.preset ?? 'double', widthMm: A4.widthMm - 2 * A4.marginMm,
     ...(options.theme ? { theme: options.theme } : {}),
     ...(options.autoSubscript !== undefined ? { autoSubscript: options.autoSubscript } : {}),
+    ...(bars ? { errorBars: bars } : {}),
   });
-  const run = options.uncertainty;
-  const bars = run && doc.figure.errorBars ? errorBarRanges(run, doc.figure.errorBars) : undefined;
-  const scene = bars ? addErrorBars(laidOut, analysis.profile, bars) : laidOut;
   const pages = new ReportPages(metrics);
   reportContent(pages, doc, analysis, report, scene, run && annotateReport(report, run));
   const font = options.subsetFont ? await options.subsetFont(options.fontBytes, usedText(pages.pages, sceneText(scene))) : options.fontBytes;

@@ -1,5 +1,10 @@
-import type { ResolvedProfile } from '../profile/types.ts';
-import type { PathItem, Scene, SceneItem } from './scene.ts';
+import type { LayoutPathway } from './collectPoints.ts';
+import type { FigureContext } from './figureContext.ts';
+import type { PlacedLevel } from './levels.ts';
+import { pathPieces } from './pathPieces.ts';
+import type { PathwayPaint } from './pathwayPaint.ts';
+import type { PathItem } from './scene.ts';
+import { fromJoulesPerMol, type EnergyUnit } from '../units/energy.ts';
 
 /** Lower and upper end of a level's error bar, in J/mol on the profile's scale. */
 export interface EnergyRange { low: number; high: number }
@@ -10,42 +15,48 @@ export type ErrorBarRanges = ReadonlyMap<string, EnergyRange>;
 /** The key of a level in `ErrorBarRanges`. */
 export const errorBarKey = (pathway: string, point: string) => `${pathway}\u0000${point}`;
 
+/** Thickness of a whisker as a share of its level's bar (our choice: reads as a thin line beside the bar). */
+const WHISKER_SHARE = 1 / 3;
+/** Longest half width of a cap, mm (our choice). */
+const MAX_CAP_MM = 1.2;
+
 /**
- * The scene with a vertical error bar (whisker with caps) drawn over each level that has a
- * range, in the level's colour, under its bar. The energy → y map is read back from the
- * levels themselves (the layout's scale is linear), so this add-on needs nothing from the
- * layout; the layout does not make room for the bars or keep labels clear of them.
+ * The ends of the bars of the drawn levels (known energy, visible pathway), in the
+ * display unit, so the energy scale can reach them.
  */
-export function addErrorBars(scene: Scene, profile: ResolvedProfile, ranges: ErrorBarRanges): Scene {
-  if (ranges.size === 0) return scene;
-  const energy = new Map<string, number>();
-  for (const p of profile.pathways) for (const q of p.points) if (q.energyJ !== null) energy.set(errorBarKey(p.id, q.id), q.energyJ);
-  const bars = scene.items.filter((i): i is PathItem & { pathway: string; point: string } => i.kind === 'path' && i.role === 'level' && i.pathway !== undefined && i.point !== undefined);
-  const known = bars.map((b) => ({ bar: b, e: energy.get(errorBarKey(b.pathway, b.point)), y: (b.segments[0] as { y: number }).y })).filter((k): k is typeof k & { e: number } => k.e !== undefined);
-  const lo = known.reduce<(typeof known)[number] | null>((a, k) => (a === null || k.e < a.e ? k : a), null);
-  const hi = known.reduce<(typeof known)[number] | null>((a, k) => (a === null || k.e > a.e ? k : a), null);
-  if (!lo || !hi || hi.e === lo.e) return scene;
-  const slope = (hi.y - lo.y) / (hi.e - lo.e);
-  const y = (e: number) => lo.y + (e - lo.e) * slope;
-  const whiskers: SceneItem[] = [];
-  for (const { bar } of known) {
-    const range = ranges.get(errorBarKey(bar.pathway, bar.point));
-    if (!range) continue;
-    const [a, b] = bar.segments as { x: number }[];
-    const x = (a!.x + b!.x) / 2;
-    const cap = Math.min(Math.abs(b!.x - a!.x) / 4, 1.2);
-    const [top, bottom] = [y(range.high), y(range.low)];
-    const stroke = { colour: bar.stroke!.colour, widthMm: bar.stroke!.widthMm / 3, cap: 'butt' as const };
-    whiskers.push({
-      kind: 'path', role: 'errorBar', pathway: bar.pathway, point: bar.point, stroke,
-      segments: [
-        { op: 'M', x, y: top }, { op: 'L', x, y: bottom },
-        { op: 'M', x: x - cap, y: top }, { op: 'L', x: x + cap, y: top },
-        { op: 'M', x: x - cap, y: bottom }, { op: 'L', x: x + cap, y: bottom },
-      ],
-    });
-  }
-  const first = scene.items.findIndex((i) => i.kind === 'path' && i.role === 'level');
-  const items = [...scene.items.slice(0, first), ...whiskers, ...scene.items.slice(first)];
-  return { ...scene, items };
+export function errorBarEnergies(pathways: readonly LayoutPathway[], ranges: ErrorBarRanges, unit: EnergyUnit): number[] {
+  if (ranges.size === 0) return [];
+  return pathways.flatMap((p) => p.points.flatMap((q) => {
+    const r = q.energy === null ? undefined : ranges.get(errorBarKey(p.id, q.pointId));
+    return r ? [fromJoulesPerMol(r.low, unit), fromJoulesPerMol(r.high, unit)] : [];
+  }));
+}
+
+/**
+ * A vertical error bar with caps through the centre of each level that has a range, in the
+ * level's colour, on the layout's own scale `y` (display unit → mm). Each level comes back
+ * with `errorBar`: the boxes its bar covers (stroke included), which label placement counts
+ * as part of that level.
+ */
+export function errorBarItems(ctx: FigureContext, placed: readonly PlacedLevel[], ranges: ErrorBarRanges, paints: ReadonlyMap<number, PathwayPaint>, unit: EnergyUnit, y: (energy: number) => number): { items: PathItem[]; placed: PlacedLevel[] } {
+  if (ranges.size === 0) return { items: [], placed: [...placed] };
+  const items: PathItem[] = [];
+  const out = placed.map((level) => {
+    const range = ranges.get(errorBarKey(level.point.pathwayId, level.point.pointId));
+    const paint = paints.get(level.point.pathwayIndex);
+    if (!range || !paint) return level;
+    const { x } = level;
+    const cap = Math.min(level.halfWidth / 2, MAX_CAP_MM);
+    const top = y(fromJoulesPerMol(range.high, unit));
+    const bottom = y(fromJoulesPerMol(range.low, unit));
+    const stroke = { colour: paint.colour, widthMm: WHISKER_SHARE * paint.weight * ctx.strokeMm, cap: 'butt' as const };
+    const segments: PathItem['segments'] = [
+      { op: 'M', x, y: top }, { op: 'L', x, y: bottom },
+      { op: 'M', x: x - cap, y: top }, { op: 'L', x: x + cap, y: top },
+      { op: 'M', x: x - cap, y: bottom }, { op: 'L', x: x + cap, y: bottom },
+    ];
+    items.push({ kind: 'path', role: 'errorBar', pathway: level.point.pathwayId, point: level.point.pointId, stroke, segments });
+    return { ...level, errorBar: pathPieces(segments, stroke.widthMm / 2, 1) };
+  });
+  return { items, placed: out };
 }

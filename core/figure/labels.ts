@@ -35,10 +35,12 @@ export function labels(ctx: FigureContext, placed: readonly PlacedLevel[], paint
     metrics: ctx.metrics, sizeMm: ctx.sizeMm, decimals: energyDecimals(ctx.doc.settings, ctx.unit),
     energyFormat: ctx.doc.figure.energyFormat, unit: ctx.unit, daggerOnTs: ctx.doc.figure.daggerOnTs, autoSubscript: ctx.autoSubscript,
   };
+  // A level is its bar and its error bar: a label keeps clear of both and sits next to either.
   const bars = new Map(placed.map((l) => [l, barBox(l, ctx, paints.get(l.point.pathwayIndex)?.weight)] as const));
+  const levelBoxes = [...bars.values(), ...placed.flatMap((l) => l.errorBar ?? [])];
   const place = (gs: readonly Group[]) => {
     const rs = gs.map((g) => request(g, bars, ctx.lineMm));
-    return { requests: rs, all: placeLabels([...rs, ...extra.labels.map((l) => l.request)], { hard: [...bars.values(), ...hard], soft: [], bars: [...bars.values()] }, bounds, ctx.gapMm) };
+    return { requests: rs, all: placeLabels([...rs, ...extra.labels.map((l) => l.request)], { hard: [...levelBoxes, ...hard], soft: [], bars: levelBoxes }, bounds, ctx.gapMm) };
   };
   let groups = stacks(ctx, twins(ctx, placed, style, measured), style, paints);
   let { requests, all } = place(groups);
@@ -183,11 +185,12 @@ function request(g: Group, bars: ReadonlyMap<PlacedLevel, Box>, lineMm: number):
   const levels = g.entries.flatMap((e) => e.levels);
   const top = levels[0]!;
   const own = levels.map((l) => bars.get(l)!);
+  const attached = levels.flatMap((l) => l.errorBar ?? []);
   const farMm = NEAR_LEVEL_LINES * lineMm;
   if (!g.stack) {
     const block = g.entries[0]!.block;
     return {
-      x: top.x, y: top.y, halfWidth: top.halfWidth, w: block.w, h: block.h, own, farMm,
+      x: top.x, y: top.y, halfWidth: top.halfWidth, w: block.w, h: block.h, own, attached, farMm,
       prefer: top.point.kind === 'ts' ? 'above' : 'below',
       ...(top.point.labelOffsetMm ? { fixed: top.point.labelOffsetMm } : {}),
     };
@@ -195,7 +198,7 @@ function request(g: Group, bars: ReadonlyMap<PlacedLevel, Box>, lineMm: number):
   const ys = levels.map((l) => l.y);
   const ts = levels.filter((l) => l.point.kind === 'ts').length;
   return {
-    x: top.x, y: top.y, halfWidth: Math.max(...levels.map((l) => l.halfWidth)), w: g.stack.w, h: g.stack.h, own, farMm,
+    x: top.x, y: top.y, halfWidth: Math.max(...levels.map((l) => l.halfWidth)), w: g.stack.w, h: g.stack.h, own, attached, farMm,
     nearMm: Math.max(...g.entries.map((e) => e.block.h)),
     yTop: Math.min(...ys), yBottom: Math.max(...ys), prefer: 2 * ts >= levels.length ? 'above' : 'below',
   };

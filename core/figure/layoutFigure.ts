@@ -21,6 +21,7 @@ import { THEMES, type ThemeName } from './themes.ts';
 import type { PointDrawing } from '../structure/pointDepictions.ts';
 import { grownHeight, structureLayer, structureRoom } from './structures/structureLayer.ts';
 import { energyDecimals } from '../format/energyDecimals.ts';
+import { errorBarEnergies, errorBarItems, type ErrorBarRanges } from './errorBars.ts';
 
 /** Text keeps at least this far inside the page (issue 11's rule: 1 mm; a little more for rounding). */
 export const PAGE_MARGIN_MM = 1.2;
@@ -37,6 +38,8 @@ export interface LayoutOptions {
   autoSubscript?: boolean;
   /** Molecule drawings by point (see pointDepictions); none when absent. */
   structures?: ReadonlyMap<string, PointDrawing>;
+  /** Error bars by level (see errorBars.ts): drawn on the layout's scale, inside it, and kept clear by labels. */
+  errorBars?: ErrorBarRanges;
 }
 
 /**
@@ -63,7 +66,8 @@ export function layoutFigure(profile: ResolvedProfile, doc: Document, options: L
 
   const known = pathways.flatMap((p) => p.points).filter((q): q is LayoutPoint & { energy: number } => q.energy !== null);
   const plans = planAnnotations(profile, doc, pathways).plans;
-  const energies = [...known.map((q) => q.energy), ...planEnergies(plans)];
+  const ranges = options.errorBars ?? new Map();
+  const energies = [...known.map((q) => q.energy), ...planEnergies(plans), ...errorBarEnergies(pathways, ranges, profile.unit)];
   // Every tick density the final scale may choose, so the band fits its widest number.
   const tickLabels = [1, 2, 3, 4, 5].flatMap((count) => {
     const probe = energyScale(energies, 1, 0, count);
@@ -130,7 +134,10 @@ export function layoutFigure(profile: ResolvedProfile, doc: Document, options: L
   // Labels may reach into the right margin, never over the axis, and keep the page margin.
   const labelBounds = { ...plot, x: plot.x + 2 * ctx.gapMm, w: size.widthMm - PAGE_MARGIN_MM - plot.x - 2 * ctx.gapMm };
   // Everything drawn so far is an obstacle, whatever it is (see sceneObstacles).
-  const placedLabels = labels(ctx, placed, paintByIndex, labelBounds, sceneObstacles(items), marks, measured);
+  // sceneObstacles skips error bars like levels: labels file them as parts of their levels.
+  const bars = errorBarItems(ctx, placed, ranges, paintByIndex, profile.unit, scale.y);
+  items.push(...bars.items);
+  const placedLabels = labels(ctx, bars.placed, paintByIndex, labelBounds, sceneObstacles(items), marks, measured);
   items.push(...placedLabels.items);
   const molecules = structureLayer(ctx, placed, items, drawings, room, placedLabels.boxes, { ...labelBounds, w: labelBounds.w - ctx.gapMm });
   items.push(...molecules.items);

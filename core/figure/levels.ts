@@ -11,6 +11,8 @@ export interface PlacedLevel {
   x: number;
   y: number;
   halfWidth: number;
+  /** Boxes of its error bar (see errorBars.ts), which count as part of the level. */
+  errorBar?: readonly Box[];
 }
 
 /**

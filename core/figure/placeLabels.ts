@@ -26,6 +26,11 @@ export interface LabelRequest {
    * obstacle lies between; any other spot needs a leader line that crosses no label.
    */
   own?: readonly Box[];
+  /**
+   * Boxes drawn as part of those levels (their error bars, also listed in `Obstacles.bars`):
+   * a spot next to them is next to its level, as beside `own`; leaders still start at a bar of `own`.
+   */
+  attached?: readonly Box[];
   /** How far along its line a label may move and still count as next to its level (default h). */
   nearMm?: number;
   /** A spot whose box lies farther than this from its nearest own bar needs a leader line (default: no limit). */
@@ -60,6 +65,16 @@ export interface Obstacles {
 
 /** Extra cost of a spot that needs a leader line, in label heights (our tuning). */
 const LEADER_COST = 1.5;
+/**
+ * Where along a half bar a leader starts when the level has an error bar through its centre
+ * (our choice): well past the cap, whose half width is at most half the bar's (errorBars.ts),
+ * and short of the bar's end, where connectors leave.
+ */
+const LEADER_OFFSET = 0.8;
+
+function overlapsBox(b: Box, x: number, y: number, w: number, h: number): boolean {
+  return b.x < x + w && x < b.x + b.w && b.y < y + h && y < b.y + b.h;
+}
 
 /**
  * Greedy, deterministic placement: labels are taken in the order given; each looks at
@@ -121,27 +136,41 @@ function cheapest(r: LabelRequest, bounds: Box, gap: number, step: number, at: S
  * must cross no placed label.
  */
 function ownLevelJudge(r: LabelRequest, own: readonly Box[], gap: number, hard: BoxIndex, bars: BoxIndex, texts: BoxIndex): { cost: SpotJudge; leader: (box: Box, distance: number) => Leader | undefined } {
-  const mine = new Set(own);
+  const parts = r.attached && r.attached.length > 0 ? [...own, ...r.attached] : own;
+  const mine = new Set(parts);
   const leaderFor = (box: Box, distance: number): Leader | undefined | null => {
-    let nearest = own[0]!;
-    let ownD = Infinity;
-    for (const b of own) {
-      const d = boxDistance(box, b);
-      if (d < ownD) [ownD, nearest] = [d, b];
-    }
+    const nearestOf = (boxes: readonly Box[]) => {
+      let best = boxes[0]!;
+      let bestD = Infinity;
+      for (const b of boxes) {
+        const d = boxDistance(box, b);
+        if (d < bestD) [bestD, best] = [d, b];
+      }
+      return { box: best, d: bestD };
+    };
+    const { box: nearestPart, d: ownD } = nearestOf(parts);
     let next = distance <= (r.nearMm ?? r.h) && ownD <= (r.farMm ?? Infinity);
     if (next) next = !bars.touching(growBox(box, ownD)).some((b) => !mine.has(b) && boxDistance(box, b) < ownD - 1e-3);
     if (next) {
-      const gapBox = between(box, nearest, gap);
+      const gapBox = between(box, nearestPart, gap);
       if (gapBox) next = !hard.touching(gapBox).some((b) => !mine.has(b));
     }
     if (next) return undefined;
-    const x0 = nearest.x + nearest.w / 2;
+    const nearest = parts === own ? nearestPart : nearestOf(own).box;
+    const centre = nearest.x + nearest.w / 2;
     const y0 = nearest.y + nearest.h / 2;
-    const x1 = Math.min(Math.max(x0, box.x), box.x + box.w);
-    const y1 = Math.min(Math.max(y0, box.y), box.y + box.h);
-    const crosses = eachPiece([{ op: 'M', x: x0, y: y0 }, { op: 'L', x: x1, y: y1 }], 0, 8, (x, y, w, h) => texts.hitsAt(x, y, w, h, gap));
-    return crosses ? null : { x0, y0, x1, y1 };
+    // A leader from the bar's centre would run along the level's own error bar: start it
+    // part way to the bar's end instead, on the label's side first.
+    const toward = Math.sign(box.x + box.w / 2 - centre) || 1;
+    const starts = parts === own ? [centre] : [centre, centre + toward * LEADER_OFFSET * nearest.w / 2, centre - toward * LEADER_OFFSET * nearest.w / 2];
+    for (const x0 of starts) {
+      const x1 = Math.min(Math.max(x0, box.x), box.x + box.w);
+      const y1 = Math.min(Math.max(y0, box.y), box.y + box.h);
+      const line = [{ op: 'M' as const, x: x0, y: y0 }, { op: 'L' as const, x: x1, y: y1 }];
+      if (parts !== own && eachPiece(line, 0, 8, (x, y, w, h) => r.attached!.some((b) => overlapsBox(b, x, y, w, h)))) continue;
+      return eachPiece(line, 0, 8, (x, y, w, h) => texts.hitsAt(x, y, w, h, gap)) ? null : { x0, y0, x1, y1 };
+    }
+    return null;
   };
   return {
     cost: (x, y, distance) => {

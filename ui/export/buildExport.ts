@@ -3,7 +3,7 @@ import type { DocumentAnalysis } from '../../core/analysis/analyseDocument.ts';
 import type { PointDrawing } from '../../core/structure/pointDepictions.ts';
 import type { FontMetrics } from '../../core/figure/font/fontMetrics.ts';
 import { layoutFigure } from '../../core/figure/layoutFigure.ts';
-import { addErrorBars, type ErrorBarRanges } from '../../core/figure/errorBars.ts';
+import type { ErrorBarRanges } from '../../core/figure/errorBars.ts';
 import type { Preset } from '../../core/figure/presets.ts';
 import type { ThemeName } from '../../core/figure/themes.ts';
 import { sceneToSvg } from '../../core/export/sceneToSvg.ts';
@@ -39,10 +39,10 @@ export interface ExportFont { metrics: FontMetrics; bytes: Uint8Array }
 
 /** Lays the figure out with the chosen preset and theme (the same scene the canvas draws) and writes the chosen format. */
 export async function buildExport(doc: Document, analysis: DocumentAnalysis, font: ExportFont, choice: ExportChoice, render = true, structures?: ReadonlyMap<string, PointDrawing>): Promise<ExportFile> {
-  const figure = () => {
-    const scene = layoutFigure(analysis.profile, doc, { metrics: font.metrics, preset: choice.preset, theme: choice.theme, ...(structures ? { structures } : {}) });
-    return choice.errorBars ? addErrorBars(scene, analysis.profile, choice.errorBars) : scene;
-  };
+  const figure = () => layoutFigure(analysis.profile, doc, {
+    metrics: font.metrics, preset: choice.preset, theme: choice.theme,
+    ...(structures ? { structures } : {}), ...(choice.errorBars ? { errorBars: choice.errorBars } : {}),
+  });
   const tables = () => {
     const report = analysisReport(doc, analysis);
     return analysisTables(choice.uncertainty ? annotateReport(report, choice.uncertainty) : report, energyDecimals(doc.settings, doc.settings.unit));

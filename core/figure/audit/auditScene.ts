@@ -1,5 +1,5 @@
 import type { Box, Scene } from '../scene.ts';
-import { scenePrimitives, type Bar, type ScenePrimitives, type TextBox } from './scenePrimitives.ts';
+import { scenePrimitives, type ScenePrimitives, type StrokePiece, type TextBox } from './scenePrimitives.ts';
 import { segmentHitsBox } from './segmentHitsBox.ts';
 import { boxDistance, growBox } from '../geometry.ts';
 
@@ -15,7 +15,9 @@ export interface AuditFault {
  * - `overlaps`: two text items closer than the clearance (lines of one label block excepted);
  * - `misread`: a level label, without a leader line, whose nearest level is another one,
  *   farther than `FAR_LINES` of its text lines from its own level, or with another stroke or
- *   text between it and its own level;
+ *   text between it and its own level (a level's error bar is part of that level: it counts
+ *   in these distances and never lies between a label and its own level; crossing the
+ *   label is still a `crossings` fault);
  * - `offPage`: text less than the page margin from the edge;
  * - `legendOverContent`: the legend's extent reaching any non-legend item.
  */
@@ -109,8 +111,8 @@ function misreadLabels(p: ScenePrimitives, name: (i: number) => string): AuditFa
     const items = lines.map((l) => l.item);
     const own = p.bars.filter((b) => owners.includes(b.key));
     if (own.length === 0) continue;
-    const ownDistance = Math.min(...own.map((b) => boxDistance(box, barBox(b))));
-    const nearer = p.bars.find((b) => !owners.includes(b.key) && boxDistance(box, barBox(b)) < ownDistance - 1e-3);
+    const ownDistance = Math.min(...own.map((b) => boxDistance(box, b.box)));
+    const nearer = p.bars.find((b) => !owners.includes(b.key) && boxDistance(box, b.box) < ownDistance - 1e-3);
     if (nearer) {
       faults.push({ items, detail: `${name(items[0]!)}: nearest level is ${nearer.key}, not its own` });
       continue;
@@ -120,11 +122,12 @@ function misreadLabels(p: ScenePrimitives, name: (i: number) => string): AuditFa
       faults.push({ items, detail: `${name(items[0]!)}: ${ownDistance.toFixed(1)} mm from its level with no leader` });
       continue;
     }
-    const bar = own.find((b) => boxDistance(box, barBox(b)) <= ownDistance + EPS)!;
-    const gap = between(box, barBox(bar));
+    const bar = own.find((b) => boxDistance(box, b.box) <= ownDistance + EPS)!;
+    const gap = between(box, bar.box);
     if (!gap) continue;
     const ownBars = new Set(own.map((b) => b.key));
-    const stroke = p.strokes.find((s) => !(s.role === 'level' && ownBars.has(`${s.pathway ?? ''}/${s.point ?? ''}`)) && segmentHitsBox(s.x0, s.y0, s.x1, s.y1, gap));
+    const ownPart = (s: StrokePiece) => (s.role === 'level' || s.role === 'errorBar') && ownBars.has(`${s.pathway ?? ''}/${s.point ?? ''}`);
+    const stroke = p.strokes.find((s) => !ownPart(s) && segmentHitsBox(s.x0, s.y0, s.x1, s.y1, gap));
     const text = p.texts.find((t) => t.block !== lines[0]!.block && intersects(t.box, gap));
     if (stroke || text) faults.push({ items, detail: `${name(items[0]!)}: ${stroke ? `a ${stroke.role}` : name(text!.item)} lies between the label and its level` });
   }
@@ -158,10 +161,6 @@ function between(a: Box, b: Box): Box | null {
     return right - left > 2 * s ? { x: left + s, y: y0, w: right - left - 2 * s, h: Math.max(y1 - y0, EPS) } : null;
   }
   return null;
-}
-
-function barBox(b: Bar): Box {
-  return { x: b.x0, y: b.y - b.half, w: b.x1 - b.x0, h: 2 * b.half };
 }
 
 function pieceBox(s: { x0: number; y0: number; x1: number; y1: number; half: number }): Box {

@@ -24,13 +24,11 @@ export interface TextBox {
   owners: string[];
 }
 
-/** A level bar as drawn. */
+/** A part of a level as drawn: its bar, or a straight piece of its error bar; `box` includes the stroke. */
 export interface Bar {
-  x0: number;
-  x1: number;
-  y: number;
-  half: number;
+  box: Box;
   key: string;
+  part: 'level' | 'errorBar';
 }
 
 /** Everything the audit measures, flattened from a scene. */
@@ -39,6 +37,7 @@ export interface ScenePrimitives {
   /** Filled shapes without a stroke, and scene items of kinds the audit does not know, by their box. */
   areas: { box: Box; item: number; role: string }[];
   texts: TextBox[];
+  /** Level bars and the pieces of their error bars: an error bar is part of its level. */
   bars: Bar[];
 }
 
@@ -106,7 +105,17 @@ function addPath(out: ScenePrimitives, item: PathItem, i: number): void {
   }
   if (item.role === 'level' && item.segments.length === 2) {
     const [a, b] = item.segments as unknown as [{ x: number; y: number }, { x: number; y: number }];
-    out.bars.push({ x0: Math.min(a.x, b.x), x1: Math.max(a.x, b.x), y: a.y, half, key: levelKey(item.pathway, item.point) });
+    const x0 = Math.min(a.x, b.x);
+    out.bars.push({ box: { x: x0, y: a.y - half, w: Math.max(a.x, b.x) - x0, h: 2 * half }, key: levelKey(item.pathway, item.point), part: 'level' });
+  }
+  if (item.role === 'errorBar') {
+    const key = levelKey(item.pathway, item.point);
+    for (const s of out.strokes) {
+      if (s.item !== i) continue;
+      const x = Math.min(s.x0, s.x1);
+      const y = Math.min(s.y0, s.y1);
+      out.bars.push({ box: { x: x - half, y: y - half, w: Math.abs(s.x1 - s.x0) + 2 * half, h: Math.abs(s.y1 - s.y0) + 2 * half }, key, part: 'errorBar' });
+    }
   }
 }
 

@@ -45,7 +45,7 @@ export function structureLayer(ctx: FigureContext, placed: readonly PlacedLevel[
   if (drawings.size === 0) return { items: [], omitted: [] };
   const boxes: Box[] = [...placed.map((l) => barBox(l, ctx)), ...labelBoxes];
   for (const item of items) {
-    if (item.kind === 'path' && (item.role === 'connector' || item.role === 'arrow' || item.role === 'annotation' || item.role === 'leader')) boxes.push(...pathPieces(item.segments, (item.stroke?.widthMm ?? 0) / 2, 16));
+    if (item.kind === 'path' && (item.role === 'connector' || item.role === 'errorBar' || item.role === 'arrow' || item.role === 'annotation' || item.role === 'leader')) boxes.push(...pathPieces(item.segments, (item.stroke?.widthMm ?? 0) / 2, 16));
     else if (item.kind === 'text') boxes.push(item.box);
   }
   const placedDrawings = placeStructures(ctx, placed, drawings, room.sizing, { boxes }, bounds);

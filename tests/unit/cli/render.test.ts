@@ -21,12 +21,23 @@ const crowded = serializeDocument(makeDocument({
   })),
 }));
 
+/** Invented: one barrier with σ 2 kcal/mol, 95 % error bars asked for in the figure settings. */
+const withBars = (errorBars?: 'interval') => serializeDocument(makeDocument({
+  figure: { preset: 'single', ...(errorBars ? { errorBars } : {}) },
+  settings: { uncertainty: { samples: 500, seed: 3 } },
+  pathways: [{ id: 'a', name: 'A', points: [
+    { id: 'r', label: 'R', kind: 'min', energy: { mode: 'value', value: 0, unit: 'kcal/mol' } },
+    { id: 'ts', label: 'TS', kind: 'ts', energy: { mode: 'value', value: 18, unit: 'kcal/mol', sigma: 2 } },
+    { id: 'p', label: 'P', kind: 'min', energy: { mode: 'value', value: -6, unit: 'kcal/mol', sigma: 2 } },
+  ] }],
+}));
+
 async function render(argv: string[]) {
   let err = '';
   const outputs = new Map<string, string | Uint8Array>();
   const io: CliIo = {
     out: () => {}, err: (t) => { err += t; },
-    readFile: (path) => (path === 'crowded.passline' ? crowded : readFileSync(new URL(path, `file://${root}`), 'utf8')),
+    readFile: (path) => (path === 'crowded.passline' ? crowded : path === 'bars.passline' ? withBars('interval') : path === 'nobars.passline' ? withBars() : readFileSync(new URL(path, `file://${root}`), 'utf8')),
     readBytes: () => new Uint8Array(),
     writeFile: (path, data) => { outputs.set(path, data); },
   };
@@ -55,5 +66,18 @@ describe('passline render: labels left out for want of room', () => {
       const { code, err } = await render(['render', 'assets/demo/demo.passline', '-o', 'demo.pdf', '--preset', preset]);
       expect({ code, err }).toEqual({ code: 0, err: '' });
     }
+  });
+});
+
+describe('passline render: error bars', () => {
+  it('draws the bars the figure settings ask for (one per level with a σ) in the error-bars layer, and none otherwise', async () => {
+    const bars = await render(['render', 'bars.passline', '-o', 'fig.svg']);
+    expect(bars.code).toBe(0);
+    const svg = String(bars.outputs.get('fig.svg'));
+    expect(svg).toContain('<g id="error-bars">');
+    const layer = svg.slice(svg.indexOf('<g id="error-bars">'), svg.indexOf('<g id="labels">'));
+    expect(layer.match(/<path /g)).toHaveLength(2);
+    const plain = await render(['render', 'nobars.passline', '-o', 'fig.svg']);
+    expect(String(plain.outputs.get('fig.svg'))).not.toContain('error-bars');
   });
 });

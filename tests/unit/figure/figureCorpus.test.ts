@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { auditCounts, auditScene } from '../../../core/figure/audit/auditScene.ts';
 import { layoutFigure } from '../../../core/figure/layoutFigure.ts';
 import { resolveProfile } from '../../../core/profile/resolve.ts';
-import { FIGURE_CORPUS } from '../../fixtures/figureCorpus.ts';
+import { corpusErrorBars, FIGURE_CORPUS } from '../../fixtures/figureCorpus.ts';
 import { fontMetrics } from './fontFixture.ts';
 
 const metrics = fontMetrics();
@@ -36,6 +36,19 @@ describe('the figure corpus (issue 11)', () => {
       it(`audits clean in every document (${preset}, ${theme})`, { timeout: 60_000 }, () => {
         for (const e of FIGURE_CORPUS) {
           const scene = layoutFigure(resolveProfile(e.doc), e.doc, { metrics, preset, theme });
+          const audit = auditScene(scene);
+          const faults = [...audit.crossings, ...audit.overlaps, ...audit.misread, ...audit.offPage, ...audit.legendOverContent].map((f) => f.detail);
+          expect({ ...auditCounts(audit), faults: faults.slice(0, 5) }, e.name).toEqual({ ...ZERO, faults: [] });
+        }
+      });
+    }
+    // Greyscale draws some pathways with heavier bars; the dark theme changes colours only.
+    for (const theme of ['colour', 'greyscale'] as const) {
+      it(`audits clean with error bars on every level in every document (${preset}, ${theme})`, { timeout: 60_000 }, () => {
+        for (const e of FIGURE_CORPUS) {
+          const bars = corpusErrorBars(e.doc);
+          const scene = layoutFigure(resolveProfile(e.doc), e.doc, { metrics, preset, theme, errorBars: bars });
+          expect(scene.items.filter((i) => i.role === 'errorBar').length, e.name).toBe(bars.size);
           const audit = auditScene(scene);
           const faults = [...audit.crossings, ...audit.overlaps, ...audit.misread, ...audit.offPage, ...audit.legendOverContent].map((f) => f.detail);
           expect({ ...auditCounts(audit), faults: faults.slice(0, 5) }, e.name).toEqual({ ...ZERO, faults: [] });

@@ -73,6 +73,37 @@ describe('auditScene', () => {
     expect(a.misread[0]!.detail).toMatch(/between/);
   });
 
+  describe('an error bar is part of its level', () => {
+    // Level a/p at y 30 (x 45–55) with a bar from y 22 to 38 through x 50; a/q's level lies 12 mm lower.
+    const whisker = (x: number, top: number, bottom: number, pathway: string, point: string): PathItem => ({
+      kind: 'path', role: 'errorBar', pathway, point, stroke: { colour: '#000', widthMm: 0.1 },
+      segments: [{ op: 'M', x, y: top }, { op: 'L', x, y: bottom }, { op: 'M', x: x - 1, y: top }, { op: 'L', x: x + 1, y: top }, { op: 'M', x: x - 1, y: bottom }, { op: 'L', x: x + 1, y: bottom }],
+    });
+    const own = [bar(50, 30, 'a', 'p'), whisker(50, 22, 38, 'a', 'p')];
+
+    it('crossing its own level\'s label is a fault', () => {
+      const a = auditScene(scene([...own, text(46, 25, 8, 4, ids('a', 'p'))]));
+      expect(a.crossings.map((f) => f.detail)).toEqual(['errorBar through label "T"']);
+    });
+
+    it('never lies between a label and its own level, and a label beside it is next to its level', () => {
+      // Right of the bar's upper half, 1 mm from the whisker and 0.5 mm above the bar's end.
+      const beside = text(51.2, 25.4, 8, 4, ids('a', 'p'));
+      expect(auditCounts(auditScene(scene([...own, beside])))).toEqual({ crossings: 0, overlaps: 0, misread: 0, offPage: 0, legendOverContent: 0 });
+      // A label just above the top cap is 8 mm from the bar but 0.5 mm from its own error bar.
+      const aboveCap = text(46, 17.5, 8, 4, ids('a', 'p'));
+      expect(auditCounts(auditScene(scene([...own, aboveCap]))).misread).toBe(0);
+    });
+
+    it('of another level counts as that level: a label nearer it than to its own is misread', () => {
+      // b/q's level is far off (y 50) but its bar reaches up to y 27.5, next to a label 6 mm above a/p's level.
+      const label = text(56, 20, 8, 4, ids('a', 'p'));
+      const items = [bar(50, 30, 'a', 'p'), bar(60, 50, 'b', 'q'), whisker(60, 24.5, 55, 'b', 'q'), label];
+      const a = auditScene(scene(items));
+      expect(a.misread.map((f) => f.detail)).toEqual(['label "T": nearest level is b/q, not its own']);
+    });
+  });
+
   it('accepts a shared label whose nearest level is any of the levels it names', () => {
     const shared = text(46, 31.5, 8, 4, { ...ids('a', 'p'), levels: [ids('a', 'p'), ids('b', 'q')] });
     expect(auditCounts(auditScene(scene([bar(50, 20, 'a', 'p'), bar(50, 30, 'b', 'q'), shared]))).misread).toBe(0);

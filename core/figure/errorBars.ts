@@ -20,6 +20,12 @@ const WHISKER_SHARE = 1 / 3;
 /** Longest half width of a cap, mm (our choice). */
 const MAX_CAP_MM = 1.2;
 
+/** The ends of one level's bar in the display unit, or undefined where it has none. */
+function barEnds(ranges: ErrorBarRanges, unit: EnergyUnit, pathwayId: string, pointId: string): { low: number; high: number } | undefined {
+  const r = ranges.get(errorBarKey(pathwayId, pointId));
+  return r ? { low: fromJoulesPerMol(r.low, unit), high: fromJoulesPerMol(r.high, unit) } : undefined;
+}
+
 /**
  * The ends of the bars of the drawn levels (known energy, visible pathway), in the
  * display unit, so the energy scale can reach them.
@@ -27,9 +33,15 @@ const MAX_CAP_MM = 1.2;
 export function errorBarEnergies(pathways: readonly LayoutPathway[], ranges: ErrorBarRanges, unit: EnergyUnit): number[] {
   if (ranges.size === 0) return [];
   return pathways.flatMap((p) => p.points.flatMap((q) => {
-    const r = q.energy === null ? undefined : ranges.get(errorBarKey(p.id, q.pointId));
-    return r ? [fromJoulesPerMol(r.low, unit), fromJoulesPerMol(r.high, unit)] : [];
+    const ends = q.energy === null ? undefined : barEnds(ranges, unit, p.id, q.pointId);
+    return ends ? [ends.low, ends.high] : [];
   }));
+}
+
+/** Each level with its bar's ends (`low`, `high`, display unit) where it has a bar. */
+export function withErrorBarEnds<T extends { pathwayId: string; pointId: string }>(points: readonly T[], ranges: ErrorBarRanges, unit: EnergyUnit): (T & { low?: number; high?: number })[] {
+  if (ranges.size === 0) return [...points];
+  return points.map((q) => ({ ...q, ...barEnds(ranges, unit, q.pathwayId, q.pointId) }));
 }
 
 /**

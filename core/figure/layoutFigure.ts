@@ -21,7 +21,7 @@ import { THEMES, type ThemeName } from './themes.ts';
 import type { PointDrawing } from '../structure/pointDepictions.ts';
 import { grownHeight, structureLayer, structureRoom } from './structures/structureLayer.ts';
 import { energyDecimals } from '../format/energyDecimals.ts';
-import { errorBarEnergies, errorBarItems, type ErrorBarRanges } from './errorBars.ts';
+import { errorBarEnergies, errorBarItems, withErrorBarEnds, type ErrorBarRanges } from './errorBars.ts';
 
 /** Text keeps at least this far inside the page (issue 11's rule: 1 mm; a little more for rounding). */
 export const PAGE_MARGIN_MM = 1.2;
@@ -86,6 +86,7 @@ export function layoutFigure(profile: ResolvedProfile, doc: Document, options: L
   const measured = new Map(known.slice(0, 200).map((q) => [q, labelBlock(q.label, q.kind, q.energy, style)] as const));
   const tallest = Math.max(0, ...[...measured.values()].map((b) => b.h));
   const stacked = stackDepth(known);
+  const stackPoints = withErrorBarEnds(known, ranges, profile.unit);
   const pad = (lines: number) => Math.max(tallest, lines * ctx.lineMm) + 3 * ctx.gapMm;
   let bottomMm = y1 - pad(stacked.bottom) - room.below;
   let topMm = y0 + pad(stacked.top) + room.above;
@@ -94,7 +95,7 @@ export function layoutFigure(profile: ResolvedProfile, doc: Document, options: L
   // a slot's top (bottom) reaches past the plot, leave it the room (twice: the new scale
   // may join one more level).
   for (let pass = 0; pass < 2; pass++) {
-    const short = stackShortfall(known, scale.y, { top: y0, bottom: y1, join: tallest + 6 * ctx.gapMm, line: STACK_LINE * ctx.lineMm, gap: 3 * ctx.gapMm });
+    const short = stackShortfall(stackPoints, scale.y, { top: y0, bottom: y1, join: tallest + 6 * ctx.gapMm, line: STACK_LINE * ctx.lineMm, gap: 3 * ctx.gapMm });
     const up = Math.max(0, short.top);
     const down = Math.max(0, short.bottom);
     if (up + down <= 1e-3) break;
@@ -155,26 +156,38 @@ const MIN_LEVEL_SPAN = 0.4;
 /**
  * How far the stacked label above each slot's top level (below its bottom level) would
  * reach past the plot's top (bottom), at most, in mm: levels of one slot closer than `join`
- * mm join one stack (as labels.ts joins them), a stack takes `line` mm a level plus `gap`.
- * Negative when every stack fits. One sort per slot, no pairwise work.
+ * mm join one stack (as labels.ts joins them), a stack takes `line` mm a level plus `gap`,
+ * and starts beyond the ends of its levels' error bars (`high`/`low`, display unit), which
+ * it keeps clear of. Negative when every stack fits. One sort per slot, no pairwise work.
  */
-function stackShortfall(points: readonly { slot: number; energy: number }[], y: (e: number) => number, o: { top: number; bottom: number; join: number; line: number; gap: number }): { top: number; bottom: number } {
-  const bySlot = new Map<number, number[]>();
-  for (const q of points) bySlot.set(q.slot, [...(bySlot.get(q.slot) ?? []), y(q.energy)]);
+function stackShortfall(points: readonly StackPoint[], y: (e: number) => number, o: { top: number; bottom: number; join: number; line: number; gap: number }): { top: number; bottom: number } {
+  // Twins (one spot, y to 0.01 mm) print one line; a spot reaches as far as its bars do.
+  const bySlot = new Map<number, Map<number, { above: number; below: number }>>();
+  for (const q of points) {
+    const at = Math.round(y(q.energy) * 100) / 100;
+    const spots = bySlot.get(q.slot) ?? new Map<number, { above: number; below: number }>();
+    const spot = spots.get(at) ?? { above: at, below: at };
+    spots.set(at, { above: Math.min(spot.above, y(q.high ?? q.energy)), below: Math.max(spot.below, y(q.low ?? q.energy)) });
+    bySlot.set(q.slot, spots);
+  }
   let top = -Infinity;
   let bottom = -Infinity;
-  for (const ys of bySlot.values()) {
-    // Twins (one spot) print one line.
-    const sorted = [...new Set(ys.map((v) => Math.round(v * 100) / 100))].sort((a, b) => a - b);
+  for (const spots of bySlot.values()) {
+    const sorted = [...spots.keys()].sort((a, b) => a - b);
     let n = 1;
     while (n < sorted.length && sorted[n]! - sorted[n - 1]! < o.join) n++;
-    top = Math.max(top, n * o.line + o.gap - (sorted[0]! - o.top));
+    const upper = Math.min(...sorted.slice(0, n).map((at) => spots.get(at)!.above));
+    top = Math.max(top, n * o.line + o.gap - (upper - o.top));
     let m = 1;
     while (m < sorted.length && sorted[sorted.length - m]! - sorted[sorted.length - m - 1]! < o.join) m++;
-    bottom = Math.max(bottom, m * o.line + o.gap - (o.bottom - sorted[sorted.length - 1]!));
+    const lower = Math.max(...sorted.slice(sorted.length - m).map((at) => spots.get(at)!.below));
+    bottom = Math.max(bottom, m * o.line + o.gap - (o.bottom - lower));
   }
   return { top, bottom };
 }
+
+/** A drawn level for stackShortfall: its slot, energy and error bar ends (display unit). */
+interface StackPoint { slot: number; energy: number; low?: number; high?: number }
 
 /**
  * How many levels may stack into one label at the top and at the bottom of the plot: the

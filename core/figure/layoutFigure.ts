@@ -9,7 +9,7 @@ import { energyScale } from './energyScale.ts';
 import { figureContext } from './figureContext.ts';
 import type { FontMetrics } from './font/fontMetrics.ts';
 import { labels } from './labels.ts';
-import { labelBlock } from './labelBlock.ts';
+import { labelBlock, namesBlock } from './labelBlock.ts';
 import { legend } from './legend.ts';
 import { levels, type PlacedLevel } from './levels.ts';
 import { pathwayPaint, type PathwayPaint } from './pathwayPaint.ts';
@@ -87,15 +87,17 @@ export function layoutFigure(profile: ResolvedProfile, doc: Document, options: L
   const tallest = Math.max(0, ...[...measured.values()].map((b) => b.h));
   const stacked = stackDepth(known);
   const stackPoints = withErrorBarEnds(known, ranges, profile.unit);
+  const twinHeight = (names: string[], twin: StackPoint) => namesBlock(names, twin.kind, twin.energy, style).h;
   const pad = (lines: number) => Math.max(tallest, lines * ctx.lineMm) + 3 * ctx.gapMm;
   let bottomMm = y1 - pad(stacked.bottom) - room.below;
   let topMm = y0 + pad(stacked.top) + room.above;
   let scale = energyScale(energies, bottomMm, topMm, 5, 1.5 * ctx.lineMm);
   // Stacks are joined by mm, not energy: measure them on this scale, and where the stack at
-  // a slot's top (bottom) reaches past the plot, leave it the room (twice: the new scale
-  // may join one more level).
-  for (let pass = 0; pass < 2; pass++) {
-    const short = stackShortfall(stackPoints, scale.y, { top: y0, bottom: y1, join: tallest + 6 * ctx.gapMm, line: STACK_LINE * ctx.lineMm, gap: 3 * ctx.gapMm });
+  // a slot's top (bottom) reaches past the plot, leave it the room. A level inside the
+  // range moves by only part of the room given, and the new scale may join one more level:
+  // a few passes (our choice) bring the shortfall under a tenth of a millimetre.
+  for (let pass = 0; pass < 5; pass++) {
+    const short = stackShortfall(stackPoints, scale.y, { top: y0, bottom: y1, join: tallest + 6 * ctx.gapMm, line: STACK_LINE * ctx.lineMm, gap: 3 * ctx.gapMm, twinHeight });
     const up = Math.max(0, short.top);
     const down = Math.max(0, short.bottom);
     if (up + down <= 1e-3) break;
@@ -156,38 +158,47 @@ const MIN_LEVEL_SPAN = 0.4;
 /**
  * How far the stacked label above each slot's top level (below its bottom level) would
  * reach past the plot's top (bottom), at most, in mm: levels of one slot closer than `join`
- * mm join one stack (as labels.ts joins them), a stack takes `line` mm a level plus `gap`,
- * and starts beyond the ends of its levels' error bars (`high`/`low`, display unit), which
- * it keeps clear of. Negative when every stack fits. One sort per slot, no pairwise work.
+ * mm join one stack (as labels.ts joins them), a stack takes `line` mm a level plus `gap`
+ * (twins under several names: their measured names block, `twinHeight`), and starts beyond
+ * the ends of its levels' error bars (`high`/`low`, display unit), which it keeps clear of.
+ * Negative when every stack fits. One sort per slot, no pairwise work.
  */
-function stackShortfall(points: readonly StackPoint[], y: (e: number) => number, o: { top: number; bottom: number; join: number; line: number; gap: number }): { top: number; bottom: number } {
-  // Twins (one spot, y to 0.01 mm) print one line; a spot reaches as far as its bars do.
-  const bySlot = new Map<number, Map<number, { above: number; below: number }>>();
+function stackShortfall(
+  points: readonly StackPoint[], y: (e: number) => number,
+  o: { top: number; bottom: number; join: number; line: number; gap: number; twinHeight: (names: string[], twin: StackPoint) => number },
+): { top: number; bottom: number } {
+  // Twins (one spot, y to 0.01 mm) print one label; a spot reaches as far as its bars do.
+  type Spot = { at: number; above: number; below: number; names: Set<string>; first: StackPoint };
+  const bySlot = new Map<number, Map<number, Spot>>();
   for (const q of points) {
     const at = Math.round(y(q.energy) * 100) / 100;
-    const spots = bySlot.get(q.slot) ?? new Map<number, { above: number; below: number }>();
-    const spot = spots.get(at) ?? { above: at, below: at };
-    spots.set(at, { above: Math.min(spot.above, y(q.high ?? q.energy)), below: Math.max(spot.below, y(q.low ?? q.energy)) });
+    const spots = bySlot.get(q.slot) ?? new Map<number, Spot>();
+    const spot = spots.get(at) ?? { at, above: at, below: at, names: new Set<string>(), first: q };
+    spot.above = Math.min(spot.above, y(q.high ?? q.energy));
+    spot.below = Math.max(spot.below, y(q.low ?? q.energy));
+    if (q.label.trim() !== '') spot.names.add(q.label);
+    spots.set(at, spot);
     bySlot.set(q.slot, spots);
   }
+  const height = (spot: Spot) => (spot.names.size > 1 ? Math.max(o.line, o.twinHeight([...spot.names], spot.first)) : o.line);
   let top = -Infinity;
   let bottom = -Infinity;
   for (const spots of bySlot.values()) {
-    const sorted = [...spots.keys()].sort((a, b) => a - b);
+    const sorted = [...spots.values()].sort((a, b) => a.at - b.at);
     let n = 1;
-    while (n < sorted.length && sorted[n]! - sorted[n - 1]! < o.join) n++;
-    const upper = Math.min(...sorted.slice(0, n).map((at) => spots.get(at)!.above));
-    top = Math.max(top, n * o.line + o.gap - (upper - o.top));
+    while (n < sorted.length && sorted[n]!.at - sorted[n - 1]!.at < o.join) n++;
+    const upper = sorted.slice(0, n);
+    top = Math.max(top, upper.reduce((h, s) => h + height(s), 0) + o.gap - (Math.min(...upper.map((s) => s.above)) - o.top));
     let m = 1;
-    while (m < sorted.length && sorted[sorted.length - m]! - sorted[sorted.length - m - 1]! < o.join) m++;
-    const lower = Math.max(...sorted.slice(sorted.length - m).map((at) => spots.get(at)!.below));
-    bottom = Math.max(bottom, m * o.line + o.gap - (o.bottom - lower));
+    while (m < sorted.length && sorted[sorted.length - m]!.at - sorted[sorted.length - m - 1]!.at < o.join) m++;
+    const lower = sorted.slice(sorted.length - m);
+    bottom = Math.max(bottom, lower.reduce((h, s) => h + height(s), 0) + o.gap - (o.bottom - Math.max(...lower.map((s) => s.below))));
   }
   return { top, bottom };
 }
 
 /** A drawn level for stackShortfall: its slot, energy and error bar ends (display unit). */
-interface StackPoint { slot: number; energy: number; low?: number; high?: number }
+interface StackPoint { slot: number; energy: number; label: string; kind: 'min' | 'ts'; low?: number; high?: number }
 
 /**
  * How many levels may stack into one label at the top and at the bottom of the plot: the

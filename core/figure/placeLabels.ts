@@ -151,12 +151,15 @@ function ownLevelJudge(r: LabelRequest, own: readonly Box[], gap: number, hard: 
     const { box: nearestPart, d: ownD } = nearestOf(parts);
     let next = distance <= (r.nearMm ?? r.h) && ownD <= (r.farMm ?? Infinity);
     if (next) next = !bars.touching(growBox(box, ownD)).some((b) => !mine.has(b) && boxDistance(box, b) < ownD - 1e-3);
-    if (next) {
-      const gapBox = between(box, nearestPart, gap);
-      if (gapBox) next = !hard.touching(gapBox).some((b) => !mine.has(b));
-    }
-    if (next) return undefined;
+    const clearTo = (part: Box) => {
+      const gapBox = between(box, part, gap);
+      return !gapBox || hard.touching(gapBox).every((b) => mine.has(b));
+    };
     const nearest = parts === own ? nearestPart : nearestOf(own).box;
+    // Beside its own error bar, the label must also see its level past the bar: a connector
+    // crossing the bar between them would make the label read as another level's (the audit's rule).
+    if (next) next = clearTo(nearestPart) && (nearest === nearestPart || clearTo(nearest));
+    if (next) return undefined;
     const centre = nearest.x + nearest.w / 2;
     const y0 = nearest.y + nearest.h / 2;
     // A leader from the bar's centre would run along the level's own error bar: start it
@@ -213,8 +216,11 @@ function candidateLines(r: LabelRequest, gap: number, bounds: Box, out: SpotLine
   const top = r.yTop ?? r.y;
   const bottom = r.yBottom ?? r.y;
   const level = (top + bottom) / 2 - r.h / 2;
-  const above = top - 2 * gap - r.h;
-  const below = bottom + 2 * gap;
+  // Above and below start past the level's own error bars: a spot on the bar is never clear,
+  // and the search's steps (a third of the label's height) would overshoot the bar's end.
+  const attached = r.attached ?? [];
+  const above = Math.min(top, ...attached.map((b) => b.y)) - 2 * gap - r.h;
+  const below = Math.max(bottom, ...attached.map((b) => b.y + b.h)) + 2 * gap;
   const set = (k: number, x: number, y0: number, dir: 1 | -1, extra: number) => {
     const line = out[k]!;
     // Slide a label sideways into the bounds rather than lose a spot next to its bar.

@@ -6,6 +6,7 @@ import { layoutFigure } from '../../../core/figure/layoutFigure.ts';
 import { fontMetrics } from './fontFixture.ts';
 import { barBoxes, intersects, labelBoxes, paths } from './sceneQueries.ts';
 import { auditCounts, auditScene } from '../../../core/figure/audit/auditScene.ts';
+import { errorBarKey } from '../../../core/figure/errorBars.ts';
 
 const text = readFileSync(new URL('../../../assets/demo/demo.passline', import.meta.url), 'utf8');
 
@@ -42,5 +43,20 @@ describe('the demo figure', () => {
         expect(scene.omittedLabels).toEqual([]);
       });
     }
+  }
+
+  // Bars of ±2 kcal/mol (a typical method σ, common practice) and ±3.92 (its 95 % interval,
+  // 1.959964 σ) on every level: an 85 mm figure (the demo's own preset) still has room for every label, and
+  // the audit finds nothing (the last level's stacked label used to be left out).
+  const kcal = 4184; // J/mol per kcal/mol (thermochemical calorie, ISO 80000-5)
+  for (const half of [2, 3.92]) {
+    it(`with ±${half} kcal/mol error bars on every level, draws every label at 85 mm and audits clean`, () => {
+      const errorBars = new Map(profile.pathways.flatMap((p) => p.points.flatMap((q) =>
+        q.energyJ === null ? [] : [[errorBarKey(p.id, q.id), { low: q.energyJ - half * kcal, high: q.energyJ + half * kcal }] as const])));
+      const scene = layoutFigure(profile, loaded.doc, { metrics: fontMetrics(), widthMm: 85, errorBars });
+      expect(paths(scene, 'errorBar')).toHaveLength(paths(scene, 'level').length);
+      expect(scene.omittedLabels).toEqual([]);
+      expect(auditCounts(auditScene(scene))).toEqual({ crossings: 0, overlaps: 0, misread: 0, offPage: 0, legendOverContent: 0 });
+    });
   }
 });

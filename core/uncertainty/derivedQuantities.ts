@@ -1,4 +1,5 @@
 import type { DocumentAnalysis } from '../analysis/analyseDocument.ts';
+import { barrierUsedJ, overallReactionJ } from '../report/analysisReport.ts';
 
 /**
  * How a sampled number is stored and shown: energies in J/mol (shown in the display unit),
@@ -47,11 +48,13 @@ export function derivedQuantities(a0: DocumentAnalysis): { quantities: DerivedQu
       q(`${id}/step ${si}/barrierForward`, path, 'barrierForward', 'energy', (a) => s(a).barrierForwardJ);
       q(`${id}/step ${si}/barrierReverse`, path, 'barrierReverse', 'energy', (a) => s(a).barrierReverseJ);
       q(`${id}/step ${si}/reactionEnergy`, path, 'reactionEnergy', 'energy', (a) => s(a).reactionEnergyJ);
+      q(`${id}/step ${si}/barrierUsed`, path, 'barrierUsed', 'energy', (a) => barrierUsedJ(s(a)));
       q(`${id}/step ${si}/kForward`, path, 'kForward', 'log', (a) => s(a).logKForward);
       q(`${id}/step ${si}/kReverse`, path, 'kReverse', 'log', (a) => s(a).logKReverse);
       q(`${id}/step ${si}/equilibriumConstant`, path, 'equilibriumConstant', 'log', (a) => s(a).logEquilibriumConstant);
       q(`${id}/step ${si}/halfLifeSeconds`, path, 'halfLifeSeconds', 'log', (a) => logOf(s(a).halfLifeSeconds));
     });
+    q(`${id}/reactionEnergy`, ['pathways', pi], 'reactionEnergy', 'energy', (a) => overallReactionJ(at(a).pathway.points));
     if (pa.effectiveBarrier) {
       const path = ['pathways', pi, 'effectiveBarrier'];
       q(`${id}/effectiveBarrier`, path, 'value', 'energy', (a) => at(a).effectiveBarrier?.barrierJ ?? null);
@@ -82,7 +85,11 @@ export function derivedQuantities(a0: DocumentAnalysis): { quantities: DerivedQu
       choices.push({ key: `comparison ${ci}/faster`, path, field: 'faster', read: (a) => { const x = r(a); return x ? nameOf(x.ddgJ > 0 ? c.candidate : c.baseline) : null; } });
     } else {
       const r = (a: DocumentAnalysis) => { const x = cmp(a); return x.type === 'selectivity' ? x.result : null; };
-      c.result?.channels.forEach((ch, k) => q(`comparison ${ci}/${ch.id}/percent`, ['comparisons', ci, 'products', k], 'percent', 'plain', (a) => r(a)?.channels.find((x) => x.id === ch.id)?.percent ?? null));
+      c.result?.channels.forEach((ch, k) => {
+        const channel = (a: DocumentAnalysis) => r(a)?.channels.find((x) => x.id === ch.id);
+        q(`comparison ${ci}/${ch.id}/percent`, ['comparisons', ci, 'products', k], 'percent', 'plain', (a) => channel(a)?.percent ?? null);
+        q(`comparison ${ci}/${ch.id}/effectiveTs`, ['comparisons', ci, 'products', k], 'effectiveTs', 'energy', (a) => channel(a)?.effectiveTsJ ?? null);
+      });
       if (c.result?.pair) {
         q(`comparison ${ci}/ddG`, path, 'ddG', 'energy', (a) => r(a)?.pair?.ddgJ ?? null);
         q(`comparison ${ci}/ratio`, path, 'ratio', 'log', (a) => logOf(r(a)?.pair?.ratio));

@@ -3,6 +3,7 @@ import type { Document, Quantity, Unit } from '../model/schema.ts';
 import type { Finding, Provenance } from '../profile/types.ts';
 import type { PointRef } from '../kinetics/types.ts';
 import type { KineticStep } from '../kinetics/stepKinetics.ts';
+import type { EnergeticSpan as EnergeticSpanResult } from '../kinetics/energeticSpan.ts';
 import { fromJoulesPerMol } from '../units/energy.ts';
 import { rateStandardState } from '../analysis/rateStandardState.ts';
 
@@ -65,8 +66,14 @@ export interface AnalysisReport {
 }
 
 /** Labels are shown as written; a label that repeats in a cycle's X_TOF table gets its id. */
-function controlKey(ref: PointRef, taken: Record<string, number>): string {
-  return ref.label in taken ? `${ref.label} (${ref.id})` : ref.label;
+function controlKey(ref: PointRef, taken: ReadonlySet<string>): string {
+  return taken.has(ref.label) ? `${ref.label} (${ref.id})` : ref.label;
+}
+
+/** The keys of a cycle's X_TOF table, TSs then intermediates, in the order of `span.transitionStates, span.intermediates`. */
+export function controlKeys(span: Pick<EnergeticSpanResult, 'transitionStates' | 'intermediates'>): string[] {
+  const taken = new Set<string>();
+  return [...span.transitionStates, ...span.intermediates].map((s) => { const k = controlKey(s, taken); taken.add(k); return k; });
 }
 
 /** Pseudo-first-order wording for half-lives of effective barriers and bimolecular steps. */
@@ -102,7 +109,10 @@ export function analysisReport(doc: Document, analysis: DocumentAnalysis): Analy
     standardState: rateStandardState(doc),
     pathways: analysis.pathways.map(({ pathway, steps, effectiveBarrier: eb, feasibility, energeticSpan: span }) => {
       const control: Record<string, number> = {};
-      for (const s of [...(span?.transitionStates ?? []), ...(span?.intermediates ?? [])]) control[controlKey(s, control)] = s.xTof;
+      if (span) {
+        const states = [...span.transitionStates, ...span.intermediates];
+        controlKeys(span).forEach((k, j) => { control[k] = states[j]!.xTof; });
+      }
       return {
         name: pathway.name,
         cycle: pathway.cycle,

@@ -1,5 +1,5 @@
 import type { DocumentAnalysis } from '../analysis/analyseDocument.ts';
-import { barrierUsedJ, overallReactionJ } from '../report/analysisReport.ts';
+import { barrierUsedJ, controlKeys, overallReactionJ } from '../report/analysisReport.ts';
 
 /**
  * How a sampled number is stored and shown: energies in J/mol (shown in the display unit),
@@ -14,6 +14,8 @@ export interface DerivedQuantity {
   /** Path of the object in `analyze --json` that holds the number, and its field name there. */
   path: (string | number)[];
   field: string;
+  /** For a number inside a keyed table (a cycle's X_TOF): its key there; the interval goes under `field` → `entry`. */
+  entry?: string;
   scale: QuantityScale;
   /** For a point's energy: the pathway and point ids. */
   at?: { pathway: string; point: string };
@@ -69,6 +71,11 @@ export function derivedQuantities(a0: DocumentAnalysis): { quantities: DerivedQu
       q(`${id}/span/tofApprox`, path, 'tofApprox', 'log', (a) => logOf(sp(a)?.tofApprox));
       q(`${id}/span/apparentBarrier`, path, 'apparentBarrier', 'energy', (a) => sp(a)?.apparentBarrierJ ?? null);
       q(`${id}/span/reactionEnergy`, path, 'reactionEnergy', 'energy', (a) => sp(a)?.reactionEnergyJ ?? null);
+      const nTs = span.transitionStates.length;
+      controlKeys(span).forEach((entry, j) => {
+        const state = (a: DocumentAnalysis) => { const x = sp(a); return x ? (j < nTs ? x.transitionStates[j] : x.intermediates[j - nTs]) : undefined; };
+        quantities.push({ key: `${id}/span/xTof/${entry}`, path, field: 'degreeOfTofControl', entry, scale: 'plain', read: (a) => state(a)?.xTof ?? null });
+      });
       choices.push({ key: `${id}/span/tdts`, path, field: 'tdts', read: (a) => sp(a)?.tdts.label ?? null });
       choices.push({ key: `${id}/span/tdi`, path, field: 'tdi', read: (a) => sp(a)?.tdi.label ?? null });
     }

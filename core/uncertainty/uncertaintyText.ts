@@ -1,7 +1,7 @@
 import { unitLabel } from '../units/energy.ts';
 import type { UncertainReport } from './annotateReport.ts';
 import { uncertaintyStatement } from './uncertaintyStatement.ts';
-import { intervalOf, probabilitiesOf, type Holder } from './reportReaders.ts';
+import { entryIntervalOf, intervalOf, probabilitiesOf, type Holder } from './reportReaders.ts';
 
 const sci = (x: number) => x.toPrecision(3);
 const SYMBOL = { E: 'ΔE', H: 'ΔH', G: 'ΔG' } as const;
@@ -49,6 +49,9 @@ export function uncertaintyText(report: UncertainReport, decimals = 1): string {
     if (span) {
       lines.push(`    energetic span δE ${interval(span, 'deltaE', e)} ${unit}; TOF ${interval(span, 'tof', sci)} s⁻¹ (δE approximation ${interval(span, 'tofApprox', sci)} s⁻¹); apparent barrier ${interval(span, 'apparentBarrier', e)} ${unit}; ${d}r per turnover ${interval(span, 'reactionEnergy', e)} ${unit}`);
       lines.push(`    P(TDTS): ${probabilities(span, 'tdts')}; P(TDI): ${probabilities(span, 'tdi')}`);
+      const control = Object.entries(p.energeticSpan!.degreeOfTofControl).filter(([, x]) => x >= 0.01);
+      const xTof = (k: string) => { const i = entryIntervalOf(span, 'degreeOfTofControl', k); return i ? `${i.median.toFixed(2)} [${i.low.toFixed(2)}, ${i.high.toFixed(2)}]` : '—'; };
+      if (control.length > 0) lines.push(`    degree of TOF control: ${control.map(([k]) => `${k} ${xTof(k)}`).join(', ')}`);
     }
   }
   for (const c of report.comparisons) {

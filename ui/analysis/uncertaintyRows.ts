@@ -1,14 +1,17 @@
 import type { ReportPathway } from '../../core/report/analysisReport.ts';
 import type { UncertainReport } from '../../core/uncertainty/annotateReport.ts';
-import type { Holder } from '../../core/uncertainty/reportReaders.ts';
+import { entryIntervalOf, intervalOf, type Holder } from '../../core/uncertainty/reportReaders.ts';
+import type { ReportInterval } from '../../core/uncertainty/annotateReport.ts';
 
 /** One row of the uncertainty panel: a number the analysis panel shows, and where its interval sits. */
 export interface UncertaintyRow {
   label: string;
   holder: Holder;
   field: string;
-  /** Energies print with the document's decimals; everything else in the app's scientific notation. */
-  kind: 'energy' | 'number';
+  /** For an entry of a keyed table (a cycle's X_TOF): its key. */
+  entry?: string;
+  /** Energies print with the document's decimals, shares (X_TOF) in %, everything else in the app's scientific notation. */
+  kind: 'energy' | 'number' | 'share';
 }
 
 const SYMBOL = { E: 'E', H: 'H', G: 'G' } as const;
@@ -32,6 +35,8 @@ export function pathwayUncertaintyRows(report: UncertainReport, p: ReportPathway
     row(`Energetic span δE / ${unit}`, span, 'deltaE', 'energy');
     row('TOF / s⁻¹', span, 'tof', 'number');
     row('TOF, δE approximation / s⁻¹', span, 'tofApprox', 'number');
+    // The analysis panel lists states with X_TOF ≥ 0.5 %.
+    for (const [key, x] of Object.entries(span.degreeOfTofControl)) if (x >= 0.005) rows.push({ label: `X_TOF ${key}`, holder: span, field: 'degreeOfTofControl', entry: key, kind: 'share' });
   }
   for (const s of p.steps) {
     const name = `${s.from} → ${s.to}`;
@@ -44,4 +49,9 @@ export function pathwayUncertaintyRows(report: UncertainReport, p: ReportPathway
     row(`t½ ${name} / s`, s, 'halfLifeSeconds', 'number');
   }
   return rows;
+}
+
+/** The interval of a row, or null when the run gave none. */
+export function rowInterval(r: UncertaintyRow): ReportInterval | null {
+  return r.entry === undefined ? intervalOf(r.holder, r.field) : entryIntervalOf(r.holder, r.field, r.entry);
 }

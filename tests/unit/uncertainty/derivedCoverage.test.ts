@@ -1,6 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { makeDocument } from '../../../core/model/load.ts';
 import { analyseUncertainty, type UncertaintyResult } from '../../../core/uncertainty/uncertaintyRun.ts';
+import { analyseDocument } from '../../../core/analysis/analyseDocument.ts';
+import { analysisReport } from '../../../core/report/analysisReport.ts';
+import { annotateReport } from '../../../core/uncertainty/annotateReport.ts';
+import { entryIntervalOf } from '../../../core/uncertainty/reportReaders.ts';
+import { uncertaintyText } from '../../../core/uncertainty/uncertaintyText.ts';
 import { onePathway, typed } from '../profile/builders.ts';
 
 // Two-sided 95 % quantile of the standard normal, z₀.₉₇₅ = 1.959963985 (Abramowitz & Stegun, Table 26.5, from memory).
@@ -52,5 +57,22 @@ describe('uncertainty: numbers the outputs show that had no interval before', ()
     expect(x.point).toBeCloseTo(15, 9);
     expect(Math.abs(x.low - (15 - Z975))).toBeLessThan(TOL);
     expect(Math.abs(y.high - (16.2 + 0.5 * Z975))).toBeLessThan(TOL * 0.5);
+  });
+
+  it('a cycle\'s degree of TOF control: percentiles are X_TOF at T2₀ ∓ 1.959964 σ (one input, X_TOF monotone in it)', () => {
+    // Invented cycle; only T2 (12 kcal/mol) carries σ 1. Quantiles commute with a monotone map, so the
+    // 2.5/97.5 % points of X_TOF(T2) are the point analysis at T2 = 12 ∓ z σ (normal quantiles); bracket z by 4 s.e.
+    const cycle = (t2: number, sigma?: number) => makeDocument({ pathways: [{ id: 'c', name: 'c', cycle: true, points: [typed('C1', 'min', 0), typed('T1', 'ts', 13), typed('C2', 'min', -3), sigma ? valueWithSigma('T2', 'ts', t2, sigma) : typed('T2', 'ts', t2), typed('C1′', 'min', -6)] }] });
+    const xOf = (t2: number) => analysisReport(cycle(t2), analyseDocument(cycle(t2))).pathways[0]!.energeticSpan!.degreeOfTofControl.T2!;
+    const doc = cycle(12, 1);
+    const report = annotateReport(analysisReport(doc, analyseDocument(doc)), analyseUncertainty(doc, { samples: N, seed: 14 }));
+    const span = report.pathways[0]!.energeticSpan!;
+    const i = entryIntervalOf(span, 'degreeOfTofControl', 'T2')!;
+    const within = (v: number, a: number, b: number) => v >= Math.min(a, b) && v <= Math.max(a, b);
+    expect(within(i.low, xOf(12 - Z975 - TOL), xOf(12 - Z975 + TOL))).toBe(true);
+    expect(within(i.high, xOf(12 + Z975 - TOL), xOf(12 + Z975 + TOL))).toBe(true);
+    expect(within(i.median, xOf(12 - TOL), xOf(12 + TOL))).toBe(true);
+    expect(span.degreeOfTofControl.T2).toBeCloseTo(xOf(12), 12);
+    expect(uncertaintyText(report)).toMatch(/degree of TOF control: .*T2 0\.\d\d \[0\.\d\d, [01]\.\d\d\]/);
   });
 });

@@ -2,6 +2,7 @@ import type { AnalysisReport, ReportComparison, ReportPathway } from '../report/
 import type { UncertainReport } from '../uncertainty/annotateReport.ts';
 import { probabilitiesOf, type Holder } from '../uncertainty/reportReaders.ts';
 import { unitLabel } from '../units/energy.ts';
+import { roundSignificant as sig } from '../format/tableNumber.ts';
 import { buildTable, type IntervalSpec, type TableSpec } from './columnSpec.ts';
 import type { Table } from './tables.ts';
 import { uncertaintyTables, type UncertaintyTables } from './uncertaintyTables.ts';
@@ -175,6 +176,3 @@ function round(value: number, decimals: number): number {
   return Object.is(r, -0) ? 0 : r;
 }
 
-function sig(value: number | null): number | null {
-  return value === null || !Number.isFinite(value) ? null : Number(value.toPrecision(4));
-}

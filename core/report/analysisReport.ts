@@ -2,6 +2,8 @@ import type { DocumentAnalysis } from '../analysis/analyseDocument.ts';
 import type { Document, Quantity, Unit } from '../model/schema.ts';
 import type { Finding, Provenance } from '../profile/types.ts';
 import type { PointRef } from '../kinetics/types.ts';
+import type { KineticStep } from '../kinetics/stepKinetics.ts';
+import type { EnergeticSpan as EnergeticSpanResult } from '../kinetics/energeticSpan.ts';
 import { fromJoulesPerMol } from '../units/energy.ts';
 import { rateStandardState } from '../analysis/rateStandardState.ts';
 
@@ -64,14 +66,32 @@ export interface AnalysisReport {
 }
 
 /** Labels are shown as written; a label that repeats in a cycle's X_TOF table gets its id. */
-function controlKey(ref: PointRef, taken: Record<string, number>): string {
-  return ref.label in taken ? `${ref.label} (${ref.id})` : ref.label;
+function controlKey(ref: PointRef, taken: ReadonlySet<string>): string {
+  return taken.has(ref.label) ? `${ref.label} (${ref.id})` : ref.label;
+}
+
+/** The keys of a cycle's X_TOF table, TSs then intermediates, in the order of `span.transitionStates, span.intermediates`. */
+export function controlKeys(span: Pick<EnergeticSpanResult, 'transitionStates' | 'intermediates'>): string[] {
+  const taken = new Set<string>();
+  return [...span.transitionStates, ...span.intermediates].map((s) => { const k = controlKey(s, taken); taken.add(k); return k; });
 }
 
 /** Pseudo-first-order wording for half-lives of effective barriers and bimolecular steps. */
 export const HALF_LIFE_ORDER = 'first order, or pseudo-first order with partners at 1 mol/L';
 
 export { rateStandardState } from '../analysis/rateStandardState.ts';
+
+/** The forward barrier a step's k uses, J/mol: the TS raised to the higher neighbouring minimum where it lies below one. */
+export function barrierUsedJ(s: Pick<KineticStep, 'barrierForwardJ' | 'reactionEnergyJ' | 'negativeBarrier'>): number | null {
+  if (s.barrierForwardJ === null || s.reactionEnergyJ === null) return null;
+  return s.negativeBarrier ? Math.max(s.barrierForwardJ, 0, s.reactionEnergyJ) : s.barrierForwardJ;
+}
+
+/** A pathway's overall reaction energy, J/mol: its last known point minus its first. */
+export function overallReactionJ(points: readonly { energyJ: number | null }[]): number | null {
+  const known = points.filter((p) => p.energyJ !== null);
+  return known.length > 1 ? known.at(-1)!.energyJ! - known[0]!.energyJ! : null;
+}
 
 /** Builds the analysis report, energies in the document's display unit, rates in SI. */
 export function analysisReport(doc: Document, analysis: DocumentAnalysis): AnalysisReport {
@@ -88,9 +108,11 @@ export function analysisReport(doc: Document, analysis: DocumentAnalysis): Analy
     reference: profile.reference ?? { kind: doc.settings.reference.kind, text: '' },
     standardState: rateStandardState(doc),
     pathways: analysis.pathways.map(({ pathway, steps, effectiveBarrier: eb, feasibility, energeticSpan: span }) => {
-      const known = pathway.points.filter((p) => p.energyJ !== null);
       const control: Record<string, number> = {};
-      for (const s of [...(span?.transitionStates ?? []), ...(span?.intermediates ?? [])]) control[controlKey(s, control)] = s.xTof;
+      if (span) {
+        const states = [...span.transitionStates, ...span.intermediates];
+        controlKeys(span).forEach((k, j) => { control[k] = states[j]!.xTof; });
+      }
       return {
         name: pathway.name,
         cycle: pathway.cycle,
@@ -100,14 +122,14 @@ export function analysisReport(doc: Document, analysis: DocumentAnalysis): Analy
           barrierForward: en(s.barrierForwardJ), barrierReverse: en(s.barrierReverseJ), reactionEnergy: en(s.reactionEnergyJ),
           kForward: s.kForward, kReverse: s.kReverse, kForwardUnit: s.unitForward, kReverseUnit: s.unitReverse,
           equilibriumConstant: s.equilibriumConstant, halfLifeSeconds: s.halfLifeSeconds, barrierless: s.barrierless, negativeBarrier: s.negativeBarrier,
-          barrierUsed: s.barrierForwardJ === null || s.reactionEnergyJ === null ? null : e(s.negativeBarrier ? Math.max(s.barrierForwardJ, 0, s.reactionEnergyJ) : s.barrierForwardJ),
+          barrierUsed: en(barrierUsedJ(s)),
         })),
         effectiveBarrier: eb && {
           value: e(eb.barrierJ), ts: eb.ts.label, intermediate: eb.intermediate.label, halfLifeSeconds: feasibility?.halfLifeSeconds ?? null, reading: feasibility ? `${feasibility.band} (${feasibility.basis})` : null,
           tsRaised: eb.tsRaised, noBarrier: eb.barrierJ <= 0, halfLifeOrder: HALF_LIFE_ORDER,
         },
         scale: pathway.scaleKey ?? '',
-        reactionEnergy: known.length > 1 ? e(known.at(-1)!.energyJ! - known[0]!.energyJ!) : null,
+        reactionEnergy: en(overallReactionJ(pathway.points)),
         energeticSpan: span && {
           deltaE: e(span.deltaEJ), tdts: span.tdts.label, tdi: span.tdi.label, tof: span.tof, tofApprox: span.tofApprox,
           apparentBarrier: en(span.apparentBarrierJ), reactionEnergy: e(span.reactionEnergyJ), degreeOfTofControl: control, convention: span.convention,

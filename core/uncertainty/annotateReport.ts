@@ -36,7 +36,7 @@ function objectAt(root: unknown, path: readonly (string | number)[]): Record<str
 /**
  * The analysis report with the Monte Carlo results beside each quantity: every object that
  * holds a sampled number gets an `uncertainty` object with `{ median, low, high }` under the
- * number's field name (energies in the report's unit, rates and ratios as numbers; an ee
+ * number's field name (a keyed table's entries, such as a cycle's X_TOF, under field → key; energies in the report's unit, rates and ratios as numbers; an ee
  * signed toward the point estimate's major product, negative where the other wins), and
  * `<field>Probability` maps for categorical results (TDTS, TDI, faster pathway, major
  * product). The top-level `uncertainty` states N, the seed and every input σ.
@@ -52,7 +52,9 @@ export function annotateReport(report: AnalysisReport, result: UncertaintyResult
     const h = holder(q.path);
     if (!h || !q.interval) continue;
     const v = (x: number) => reportValue(x, q.scale, report.unit);
-    h[q.field] = { median: v(q.interval.median), low: v(q.interval.low), high: v(q.interval.high) } satisfies ReportInterval;
+    const interval = { median: v(q.interval.median), low: v(q.interval.low), high: v(q.interval.high) } satisfies ReportInterval;
+    if (q.entry === undefined) h[q.field] = interval;
+    else ((h[q.field] ??= {}) as Record<string, ReportInterval>)[q.entry] = interval;
   }
   for (const c of result.choices) {
     const h = holder(c.path);

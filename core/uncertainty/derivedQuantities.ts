@@ -1,4 +1,5 @@
 import type { DocumentAnalysis } from '../analysis/analyseDocument.ts';
+import { barrierUsedJ, controlKeys, overallReactionJ } from '../report/analysisReport.ts';
 
 /**
  * How a sampled number is stored and shown: energies in J/mol (shown in the display unit),
@@ -13,6 +14,8 @@ export interface DerivedQuantity {
   /** Path of the object in `analyze --json` that holds the number, and its field name there. */
   path: (string | number)[];
   field: string;
+  /** For a number inside a keyed table (a cycle's X_TOF): its key there; the interval goes under `field` → `entry`. */
+  entry?: string;
   scale: QuantityScale;
   /** For a point's energy: the pathway and point ids. */
   at?: { pathway: string; point: string };
@@ -47,11 +50,13 @@ export function derivedQuantities(a0: DocumentAnalysis): { quantities: DerivedQu
       q(`${id}/step ${si}/barrierForward`, path, 'barrierForward', 'energy', (a) => s(a).barrierForwardJ);
       q(`${id}/step ${si}/barrierReverse`, path, 'barrierReverse', 'energy', (a) => s(a).barrierReverseJ);
       q(`${id}/step ${si}/reactionEnergy`, path, 'reactionEnergy', 'energy', (a) => s(a).reactionEnergyJ);
+      q(`${id}/step ${si}/barrierUsed`, path, 'barrierUsed', 'energy', (a) => barrierUsedJ(s(a)));
       q(`${id}/step ${si}/kForward`, path, 'kForward', 'log', (a) => s(a).logKForward);
       q(`${id}/step ${si}/kReverse`, path, 'kReverse', 'log', (a) => s(a).logKReverse);
       q(`${id}/step ${si}/equilibriumConstant`, path, 'equilibriumConstant', 'log', (a) => s(a).logEquilibriumConstant);
       q(`${id}/step ${si}/halfLifeSeconds`, path, 'halfLifeSeconds', 'log', (a) => logOf(s(a).halfLifeSeconds));
     });
+    q(`${id}/reactionEnergy`, ['pathways', pi], 'reactionEnergy', 'energy', (a) => overallReactionJ(at(a).pathway.points));
     if (pa.effectiveBarrier) {
       const path = ['pathways', pi, 'effectiveBarrier'];
       q(`${id}/effectiveBarrier`, path, 'value', 'energy', (a) => at(a).effectiveBarrier?.barrierJ ?? null);
@@ -66,6 +71,11 @@ export function derivedQuantities(a0: DocumentAnalysis): { quantities: DerivedQu
       q(`${id}/span/tofApprox`, path, 'tofApprox', 'log', (a) => logOf(sp(a)?.tofApprox));
       q(`${id}/span/apparentBarrier`, path, 'apparentBarrier', 'energy', (a) => sp(a)?.apparentBarrierJ ?? null);
       q(`${id}/span/reactionEnergy`, path, 'reactionEnergy', 'energy', (a) => sp(a)?.reactionEnergyJ ?? null);
+      const nTs = span.transitionStates.length;
+      controlKeys(span).forEach((entry, j) => {
+        const state = (a: DocumentAnalysis) => { const x = sp(a); return x ? (j < nTs ? x.transitionStates[j] : x.intermediates[j - nTs]) : undefined; };
+        quantities.push({ key: `${id}/span/xTof/${entry}`, path, field: 'degreeOfTofControl', entry, scale: 'plain', read: (a) => state(a)?.xTof ?? null });
+      });
       choices.push({ key: `${id}/span/tdts`, path, field: 'tdts', read: (a) => sp(a)?.tdts.label ?? null });
       choices.push({ key: `${id}/span/tdi`, path, field: 'tdi', read: (a) => sp(a)?.tdi.label ?? null });
     }
@@ -82,7 +92,11 @@ export function derivedQuantities(a0: DocumentAnalysis): { quantities: DerivedQu
       choices.push({ key: `comparison ${ci}/faster`, path, field: 'faster', read: (a) => { const x = r(a); return x ? nameOf(x.ddgJ > 0 ? c.candidate : c.baseline) : null; } });
     } else {
       const r = (a: DocumentAnalysis) => { const x = cmp(a); return x.type === 'selectivity' ? x.result : null; };
-      c.result?.channels.forEach((ch, k) => q(`comparison ${ci}/${ch.id}/percent`, ['comparisons', ci, 'products', k], 'percent', 'plain', (a) => r(a)?.channels.find((x) => x.id === ch.id)?.percent ?? null));
+      c.result?.channels.forEach((ch, k) => {
+        const channel = (a: DocumentAnalysis) => r(a)?.channels.find((x) => x.id === ch.id);
+        q(`comparison ${ci}/${ch.id}/percent`, ['comparisons', ci, 'products', k], 'percent', 'plain', (a) => channel(a)?.percent ?? null);
+        q(`comparison ${ci}/${ch.id}/effectiveTs`, ['comparisons', ci, 'products', k], 'effectiveTs', 'energy', (a) => channel(a)?.effectiveTsJ ?? null);
+      });
       if (c.result?.pair) {
         q(`comparison ${ci}/ddG`, path, 'ddG', 'energy', (a) => r(a)?.pair?.ddgJ ?? null);
         q(`comparison ${ci}/ratio`, path, 'ratio', 'log', (a) => logOf(r(a)?.pair?.ratio));

@@ -8,7 +8,7 @@ import type { InputTarget, UncertainInput } from './uncertainInputs.ts';
  * (whose rejections bias the tail): it never leaves k > 0, keeps the entered value as the
  * median, matches σ to first order (σ_ln = σ/value is the relative standard uncertainty), and
  * makes the Eyring barrier ±RT ln k exactly normal, so a measured k and a computed barrier
- * carry the same kind of error (GUM, JCGM 101:2008 §6.4.6 for log-normal inputs, from memory).
+ * carry the same kind of error (GUM, JCGM 101:2008 §6.4.6 for log-normal inputs; citation and section from memory, tests/REFERENCES.md §12).
  */
 export function logNormalShift(value: number, delta: number): number {
   return value * Math.exp(delta / value);

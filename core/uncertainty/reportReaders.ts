@@ -8,6 +8,11 @@ export function intervalOf(holder: Holder | null | undefined, field: string): Re
   return (holder?.uncertainty?.[field] as ReportInterval | undefined) ?? null;
 }
 
+/** The interval of entry `key` of a keyed table `field` (a cycle's `degreeOfTofControl`), or null. */
+export function entryIntervalOf(holder: Holder | null | undefined, field: string, key: string): ReportInterval | null {
+  return ((holder?.uncertainty?.[field] as Record<string, ReportInterval> | undefined)?.[key]) ?? null;
+}
+
 /** The outcome probabilities of a categorical result (`tdts`, `tdi`, `faster`, `major`), most likely first. */
 export function probabilitiesOf(holder: Holder | null | undefined, field: string): [string, number][] {
   const p = holder?.uncertainty?.[`${field}Probability`] as Record<string, number> | undefined;

@@ -10,8 +10,8 @@ export interface VarianceShare {
  * First-order variance shares of `target` over independent inputs: the squared correlation
  * r_i² of each input's standard deviate z_i with the target, which for independent inputs
  * equals the squared standardised regression coefficient; Σ r_i² is the R² of the linear
- * model (Saltelli et al., Global Sensitivity Analysis: The Primer, Wiley 2008, §1.2, from
- * memory). `z` holds the deviates sample-major: z[s·m + i]. Samples with a non-finite target
+ * model (Saltelli et al., Global Sensitivity Analysis: The Primer, Wiley 2008, §1.2; citation
+ * from memory, tests/REFERENCES.md §12). `z` holds the deviates sample-major: z[s·m + i]. Samples with a non-finite target
  * are left out. Sorted, largest first.
  */
 export function varianceShares(target: Float64Array, z: Float64Array, inputs: readonly { key: string; label: string }[]): VarianceShare[] {

@@ -2,7 +2,7 @@ import type { DocumentAnalysis } from '../../analysis/analyseDocument.ts';
 import type { Scene } from '../../figure/scene.ts';
 import type { Document } from '../../model/schema.ts';
 import type { AnalysisReport } from '../../report/analysisReport.ts';
-import { formatScientific } from '../../format/formatScientific.ts';
+import { formatTableNumber, roundSignificant } from '../../format/tableNumber.ts';
 import { unitLabel } from '../../units/energy.ts';
 import { analysisTables } from '../analysisTables.ts';
 import type { Table } from '../tables.ts';
@@ -84,6 +84,7 @@ function stepsForPage(report: AnalysisReport, decimals: number): Table {
   };
 }
 
+/** k and t½ in the notation of every other table (the uncertainty section's k reads the same). */
 function sci(v: number): string {
-  return formatScientific(v, 3);
+  return formatTableNumber(roundSignificant(v)!);
 }

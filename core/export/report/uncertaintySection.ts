@@ -44,7 +44,7 @@ export function uncertaintySection(pages: ReportPages, report: UncertainReport, 
   const stated = uncertaintyStatement(u);
   pages.heading('Uncertainty');
   pages.paragraph(`${stated.run[0]!.toUpperCase()}${stated.run.slice(1)}.`);
-  pages.paragraph('Each input below was drawn independently from a normal distribution with its σ as entered, and every sample was run through the same resolution and analysis as the numbers above (propagation of distributions by Monte Carlo, JCGM 101:2008, Supplement 1 to the GUM). Quantities that no σ reaches are left out; an ee is signed toward the estimate\'s major product, negative where the other enantiomer is favoured.', 0.9);
+  pages.paragraph('Each input below was drawn independently from a normal distribution with its σ as entered, and every sample was run through the same resolution and analysis as the numbers above (propagation of distributions by Monte Carlo, JCGM 101:2008, Supplement 1 to the GUM; citation from memory). Quantities that no σ reaches are left out; an ee is signed toward the estimate\'s major product, negative where the other enantiomer is favoured.', 0.9);
   if (u.inputs.length === 0) {
     pages.paragraph(stated.inputs);
     return;
@@ -71,7 +71,7 @@ export function uncertaintySection(pages: ReportPages, report: UncertainReport, 
   const shares = u.rateSensitivity.flatMap((s) => s.shares.filter((x) => x.share >= MIN_SHARE).map((x) => [s.pathway, s.target, x.input, percent(x.share)]));
   if (shares.length > 0) {
     pages.heading('Which inputs matter for the rate', 1.1);
-    pages.paragraph(`Variance share of each input: the squared correlation of its sampled deviation with ln TOF (cycles) or the effective barrier (linear pathways); for independent inputs these add up to the share a linear model explains (Saltelli et al., Global Sensitivity Analysis: The Primer, Wiley 2008). Shares under ${percent(MIN_SHARE)} are left out.`, 0.9);
+    pages.paragraph(`Variance share of each input: the squared correlation of its sampled deviation with ln TOF (cycles) or the effective barrier (linear pathways); for independent inputs these add up to the share a linear model explains (Saltelli et al., Global Sensitivity Analysis: The Primer, Wiley 2008; citation from memory). Shares under ${percent(MIN_SHARE)} are left out.`, 0.9);
     pages.table(['pathway', 'of', 'input', 'variance share'], shares);
   }
 }

@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { fireEvent, render, screen, waitFor, within } from '@testing-library/svelte';
 import MechanismPanel from '../../../../ui/editor/MechanismPanel.svelte';
+import SpeciesSheet from '../../../../ui/species/SpeciesSheet.svelte';
+import { setSpeciesMolecule } from '../../../../core/edit/moleculeEdits.ts';
 import { routeStore } from './storeFixture.ts';
 
 const tsMolecule = (store: ReturnType<typeof routeStore>) => store.doc.pathways[0]!.points[1]!.molecule;
@@ -35,5 +37,21 @@ describe('a point’s structure in the mechanism editor', () => {
     await fireEvent.click(within(entry).getByRole('button', { name: 'Remove the structure of TS' }));
     await waitFor(() => expect(tsMolecule(store)).toBeUndefined());
     expect(store.history.past).toHaveLength(2);
+  }, 30_000);
+});
+
+describe('a species’ structure in the species sheet (the same entry)', () => {
+  it('refuses text the toolkit cannot read and keeps the last structure', async () => {
+    const store = routeStore();
+    store.apply(setSpeciesMolecule(store.doc, { species: 'sa', text: 'CCO' }));
+    render(SpeciesSheet, { store, metrics: null });
+    const entry = screen.getByRole('group', { name: 'Structure of SA' });
+    const field = within(entry).getByRole('textbox', { name: 'Structure (SMILES, molfile or XYZ) of SA' }) as HTMLInputElement;
+    await fireEvent.change(field, { target: { value: 'C1CC' } });
+    expect((await within(entry).findByRole('alert', {}, { timeout: 20_000 })).textContent).toMatch(/^Not read: /);
+    expect(store.doc.species[0]!.molecule).toEqual({ format: 'smiles', text: 'CCO' });
+    await fireEvent.change(field, { target: { value: 'CC(=O)O' } });
+    await waitFor(() => expect(store.doc.species[0]!.molecule).toEqual({ format: 'smiles', text: 'CC(=O)O' }));
+    expect(within(entry).queryByRole('alert')).toBeNull();
   }, 30_000);
 });

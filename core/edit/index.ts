@@ -1,6 +1,8 @@
-export { insertPoint, deletePoint, duplicatePoint, movePoint, setKind, setLabel, setEnergy, energyProblem, type PointRef } from './pointEdits.ts';
+export { insertPoint, deletePoint, duplicatePoint, movePoint, setKind, setLabel, setEnergy, setPointMolecule, energyProblem, type PointRef } from './pointEdits.ts';
 export { insertPathway, deletePathway, duplicatePathway, movePathway, setPathwayName, setCycle, setStyle } from './pathwayEdits.ts';
 export { setSettings, settingsProblem, setFigure, setTitle } from './settingsEdits.ts';
+export { setReference, referenceProblem, referencePoint, referenceFallback, referenceSummary } from './referenceEdits.ts';
+export { setSpeciesMolecule, withMoleculeText } from './moleculeEdits.ts';
 export { setPointX, setLabelOffset } from './layoutEdits.ts';
 export { dragEnergy, dragBlockedReason } from './dragEnergy.ts';
 export { addSpecies, deleteSpecies, speciesUsers, setSpeciesCell, pasteSpecies, writeSpeciesRows, type SheetEdit, type SheetError } from './speciesEdits.ts';

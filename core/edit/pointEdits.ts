@@ -2,6 +2,7 @@ import type { Document, EnergySpec, Point, PointKind } from '../model/schema.ts'
 import { EnergySpec as EnergySpecSchema } from '../model/schema.ts';
 import { mapPathway, mapPoint, moveItem } from './mapPathway.ts';
 import { uniqueId } from './uniqueId.ts';
+import { withMoleculeText } from './moleculeEdits.ts';
 
 /** Where a point lives. */
 export interface PointRef {
@@ -77,6 +78,15 @@ export function setKind(doc: Document, args: PointRef & { kind: PointKind }): Do
 /** Sets a point's label. */
 export function setLabel(doc: Document, args: PointRef & { label: string }): Document {
   return mapPoint(doc, args.pathway, args.point, (p) => (p.label === args.label ? p : { ...p, label: args.label }));
+}
+
+/**
+ * Sets the structure drawn beside a point's level from pasted or dropped text (SMILES,
+ * molfile or XYZ, format guessed; a file name helps), or removes it when the text is blank.
+ * It wins over the drawings of the species the state is made of.
+ */
+export function setPointMolecule(doc: Document, args: PointRef & { text: string; fileName?: string }): Document {
+  return mapPoint(doc, args.pathway, args.point, (p) => withMoleculeText(p, args));
 }
 
 /**

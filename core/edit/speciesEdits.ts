@@ -24,10 +24,12 @@ function renameTerms(terms: SpeciesTerm[], from: string, to: string): SpeciesTer
   return terms.some((t) => t.species === from) ? terms.map((t) => (t.species === from ? { ...t, species: to } : t)) : terms;
 }
 
-/** Points keep naming a species after its id changes. */
+/** Points and a species-sum reference keep naming a species after its id changes. */
 function renameSpecies(doc: Document, from: string, to: string): Document {
+  const ref = doc.settings.reference;
   return {
     ...doc,
+    settings: ref.kind === 'species' ? { ...doc.settings, reference: { ...ref, terms: renameTerms(ref.terms, from, to) } } : doc.settings,
     pathways: doc.pathways.map((pathway) => ({
       ...pathway,
       points: pathway.points.map((p) => {
@@ -96,13 +98,15 @@ export function addSpecies(doc: Document, args: { label?: string } = {}): Docume
   return { ...doc, species: [...doc.species, species] };
 }
 
-/** Labels of the points that use a species, for "cannot delete" messages. */
+/** Labels of the points (and the species-sum reference) that use a species, for "cannot delete" messages. */
 export function speciesUsers(doc: Document, id: string): string[] {
-  return doc.pathways.flatMap((pathway) => pathway.points.filter((p) => {
+  const ref = doc.settings.reference;
+  const points = doc.pathways.flatMap((pathway) => pathway.points.filter((p) => {
     const e = p.energy;
     const terms = [...(e.mode === 'species' || e.mode === 'formation' ? e.terms : []), ...(p.composition ?? [])];
     return terms.some((t) => t.species === id);
   }).map((p) => `${pathway.name}: ${p.label}`));
+  return ref.kind === 'species' && ref.terms.some((t) => t.species === id) ? [...points, 'the reference (what energies are measured from)'] : points;
 }
 
 /** Deletes a species no point uses (a used one stays; see {@link speciesUsers}). */

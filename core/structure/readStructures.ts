@@ -21,15 +21,18 @@ export function hasStructures(doc: Document): boolean {
 // Documents are immutable values: an edit elsewhere keeps a molecule's object, so it is read once.
 const cache = new WeakMap<StructureToolkit, WeakMap<Molecule, StructureResult>>();
 
-/** Reads every structure of the document with the (loaded) toolkit; synchronous. */
-export function readStructures(doc: Document, toolkit: StructureToolkit): StructureTable {
+/** Reads one molecule with the (loaded) toolkit, once per molecule object. */
+export function readMolecule(toolkit: StructureToolkit, molecule: Molecule): StructureResult {
   let seen = cache.get(toolkit);
   if (!seen) cache.set(toolkit, seen = new WeakMap());
-  const read = (m: Molecule): StructureResult => {
-    let result = seen!.get(m);
-    if (!result) seen!.set(m, result = toolkit.read(m));
-    return result;
-  };
+  let result = seen.get(molecule);
+  if (!result) seen.set(molecule, result = toolkit.read(molecule));
+  return result;
+}
+
+/** Reads every structure of the document with the (loaded) toolkit; synchronous. */
+export function readStructures(doc: Document, toolkit: StructureToolkit): StructureTable {
+  const read = (m: Molecule) => readMolecule(toolkit, m);
   const species = new Map<string, StructureResult>();
   for (const s of doc.species) if (s.molecule) species.set(s.id, read(s.molecule));
   const points = new Map<string, StructureResult>();

@@ -8,6 +8,7 @@ import type { ResolvedProfile } from '../../core/profile/types.ts';
 import { pointDepictions, type PointDrawing } from '../../core/structure/pointDepictions.ts';
 import { hasStructures, readStructures, type StructureTable } from '../../core/structure/readStructures.ts';
 import type { StructureToolkit } from '../../core/structure/structureToolkit.ts';
+import { referenceFallback } from '../../core/edit/referenceEdits.ts';
 import { closeGroup, record, redo, startHistory, undo, type History, type RecordOptions } from '../../core/edit/history.ts';
 import { DOCUMENT_EXTENSION, type ExportRequest, type HostApi } from '../host/hostApi.ts';
 import { suggestFileName } from './suggestFileName.ts';
@@ -78,7 +79,12 @@ export class DocumentStore {
 
   /** Loads the structure toolkit if the document needs it (a separate chunk, fetched once). */
   async needToolkit(): Promise<void> {
-    if (this.toolkit || !hasStructures(this.doc)) return;
+    if (hasStructures(this.doc)) await this.loadToolkit();
+  }
+
+  /** Loads the structure toolkit (to check a structure being typed); null with {@link toolkitProblem} set when it cannot load. */
+  async loadToolkit(): Promise<StructureToolkit | null> {
+    if (this.toolkit) return this.toolkit;
     try {
       const { loadStructureToolkit } = await import('../../core/structure/loadStructureToolkit.ts');
       this.toolkit = await loadStructureToolkit();
@@ -86,11 +92,14 @@ export class DocumentStore {
     } catch (error) {
       this.toolkitProblem = `Structures cannot be drawn: the structure toolkit did not load (${error instanceof Error ? error.message : String(error)}).`;
     }
+    return this.toolkit;
   }
 
-  /** Records the result of an edit; an edit that changed nothing leaves history alone. */
+  /** Records the result of an edit; an edit that changed nothing leaves history alone. An edit that took away the reference point says so in the status. */
   apply(next: Document, options: RecordOptions = {}): boolean {
     if (next === this.doc) return false;
+    const fallback = referenceFallback(this.doc, next);
+    if (fallback) this.status = fallback;
     this.history = record(this.history, next, options);
     return true;
   }

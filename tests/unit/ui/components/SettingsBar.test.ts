@@ -6,7 +6,7 @@ import { makeDocument } from '../../../../core/model/load.ts';
 describe('SettingsBar', () => {
   it('names the axis from quantity and unit and reports changes', async () => {
     const onchange = vi.fn();
-    render(SettingsBar, { settings: makeDocument({}).settings, onchange });
+    render(SettingsBar, { doc: makeDocument({}), onchange, onreference: vi.fn() });
     expect(screen.getByRole('group', { name: 'Document settings' }).textContent).toContain('Axis: ΔG / kcal mol⁻¹');
     await fireEvent.change(screen.getByRole('combobox', { name: 'Unit' }), { target: { value: 'kJ/mol' } });
     expect(onchange).toHaveBeenLastCalledWith({ unit: 'kJ/mol' });
@@ -16,7 +16,7 @@ describe('SettingsBar', () => {
 
   it('refuses a temperature at or below 0 K with a message, and passes a good one on', async () => {
     const onchange = vi.fn();
-    render(SettingsBar, { settings: makeDocument({}).settings, onchange });
+    render(SettingsBar, { doc: makeDocument({}), onchange, onreference: vi.fn() });
     const field = screen.getByRole('textbox', { name: 'Temperature' });
     await fireEvent.focus(field);
     await fireEvent.input(field, { target: { value: '0' } });

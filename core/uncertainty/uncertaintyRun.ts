@@ -2,16 +2,12 @@ import { analyseDocument, analyseResolved, type DocumentAnalysis } from '../anal
 import type { Document } from '../model/schema.ts';
 import { derivedQuantities, type DerivedChoice, type DerivedQuantity } from './derivedQuantities.ts';
 import { linearResolution } from './linearResolution.ts';
-import { normalSampler } from './normalSampler.ts';
-import { perturbDocument } from './perturbDocument.ts';
+import { DEFAULT_SAMPLES, DEFAULT_SEED, drawInputs } from './inputDraws.ts';
 import { frequencies, summarise, type Interval } from './summarise.ts';
-import { uncertainInputs, type UncertainInput } from './uncertainInputs.ts';
+import type { UncertainInput } from './uncertainInputs.ts';
 import { varianceShares, type VarianceShare } from './varianceShares.ts';
 
-/** Default number of Monte Carlo samples. */
-export const DEFAULT_SAMPLES = 10_000;
-/** Seed used when the document names none. */
-export const DEFAULT_SEED = 1;
+export { DEFAULT_SAMPLES, DEFAULT_SEED };
 
 export interface UncertaintyOptions {
   samples?: number | undefined;
@@ -65,18 +61,14 @@ export interface UncertaintyRun {
  * analysis). Samples are drawn input by input in document order, so a seed reproduces a run.
  */
 export function startUncertainty(doc: Document, options: UncertaintyOptions = {}): UncertaintyRun {
-  const total = Math.max(1, Math.floor(options.samples ?? doc.settings.uncertainty?.samples ?? DEFAULT_SAMPLES));
-  const seed = options.seed ?? doc.settings.uncertainty?.seed ?? DEFAULT_SEED;
-  const inputs = uncertainInputs(doc);
+  const draws = drawInputs(doc, options);
+  const { total, seed, inputs, z } = draws;
   const m = inputs.length;
   const a0 = analyseDocument(doc);
   const { quantities, choices } = derivedQuantities(a0);
   const fast = options.full ? null : linearResolution(doc, inputs, a0.profile);
-  const normal = normalSampler(seed);
-  const z = new Float64Array(total * m);
   const values = quantities.map(() => new Float64Array(total));
   const outcomes = choices.map(() => new Array<string | null>(total));
-  const deltas = new Float64Array(m);
   let done = 0;
   const record = (s: number, a: DocumentAnalysis) => {
     for (let k = 0; k < quantities.length; k++) values[k]![s] = quantities[k]!.read(a) ?? Number.NaN;
@@ -88,13 +80,8 @@ export function startUncertainty(doc: Document, options: UncertaintyOptions = {}
     step(count) {
       const end = Math.min(total, done + Math.max(0, Math.floor(count)));
       for (let s = done; s < end; s++) {
-        const off = s * m;
-        for (let i = 0; i < m; i++) z[off + i] = normal();
-        if (fast) record(s, analyseResolved(doc, fast(z, off)));
-        else {
-          for (let i = 0; i < m; i++) deltas[i] = z[off + i]! * inputs[i]!.sigma;
-          record(s, analyseDocument(perturbDocument(doc, inputs, deltas)));
-        }
+        draws.ensure(s);
+        record(s, fast ? analyseResolved(doc, fast(z, s * m)) : analyseDocument(draws.document(s)));
       }
       done = end;
     },

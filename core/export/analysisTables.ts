@@ -13,6 +13,8 @@ export interface AnalysisTables {
   steps: Table;
   effectiveBarriers: Table;
   energeticSpans: Table;
+  /** Each cycle state's degree of TOF control X_TOF (Kozuch & Shaik 2011), TSs then intermediates. */
+  tofControl: Table;
   comparisons: Table;
   /** Present only for a report annotated with a Monte Carlo run (N, seed, input σ, probabilities, variance shares). */
   uncertainty?: UncertaintyTables;
@@ -29,6 +31,7 @@ export interface AnalysisSpecs {
   steps: TableSpec<{ p: ReportPathway; s: Step }>;
   effectiveBarriers: TableSpec<{ p: ReportPathway; eb: Barrier }>;
   energeticSpans: TableSpec<{ p: ReportPathway; sp: Span }>;
+  tofControl: TableSpec<{ p: ReportPathway; sp: Span; key: string }>;
   comparisons: TableSpec<ReportComparison>;
 }
 
@@ -123,6 +126,19 @@ export function analysisSpecs(report: AnalysisReport, decimals: number): Analysi
         { title: `Δ${q}r per turnover / ${u}`, cell: ({ sp }) => e(sp.reactionEnergy), interval: energy(`Δ${q}r per turnover`, ({ sp }) => sp, 'reactionEnergy') },
       ],
     },
+    tofControl: {
+      rows: of('sp', (p) => p.energeticSpan).flatMap(({ p, sp }) => Object.keys(sp.degreeOfTofControl).map((key) => ({ p, sp, key }))),
+      subject: ({ p, key }) => `${p.name}: ${key}`,
+      columns: [
+        { title: 'cycle', cell: ({ p }) => p.name },
+        { title: 'state', cell: ({ key }) => key },
+        { title: 'kind', cell: ({ p, key }) => (stateKind(p, key) === 'ts' ? 'TS' : 'intermediate') },
+        {
+          title: 'X_TOF / %', cell: ({ sp, key }) => sig(100 * sp.degreeOfTofControl[key]!),
+          interval: { name: 'X_TOF', unit: '%', holder: ({ sp }) => sp, field: 'degreeOfTofControl', entry: ({ key }) => key, show: (v) => sig(100 * v) ?? 100 * v },
+        },
+      ],
+    },
     comparisons: {
       rows: report.comparisons,
       subject: (c) => (c.type === 'rate' ? `${c.candidate} vs ${c.baseline}` : `selectivity ${c.pathways.join(', ')}`),
@@ -165,10 +181,16 @@ export function analysisTables(report: AnalysisReport | UncertainReport, decimal
     steps: buildTable(specs.steps, uncertain),
     effectiveBarriers: buildTable(specs.effectiveBarriers, uncertain),
     energeticSpans: buildTable(specs.energeticSpans, uncertain),
+    tofControl: buildTable(specs.tofControl, uncertain),
     comparisons: buildTable(specs.comparisons, uncertain),
   };
   if (uncertain) tables.uncertainty = uncertaintyTables(report);
   return tables;
+}
+
+/** A cycle state's kind from its X_TOF key: its label, or "label (id)" where the label repeats. */
+function stateKind(p: ReportPathway, key: string): 'min' | 'ts' | undefined {
+  return (p.points.find((pt) => pt.label === key) ?? p.points.find((pt) => key.startsWith(`${pt.label} (`)))?.kind;
 }
 
 function round(value: number, decimals: number): number {

@@ -1,5 +1,5 @@
 import type { ReportInterval } from '../uncertainty/annotateReport.ts';
-import { intervalOf, type Holder } from '../uncertainty/reportReaders.ts';
+import { entryIntervalOf, intervalOf, type Holder } from '../uncertainty/reportReaders.ts';
 import type { Table } from './tables.ts';
 
 type Cell = Table['rows'][number][number];
@@ -16,6 +16,8 @@ export interface IntervalSpec<R> {
   rowUnit?: (row: R) => string;
   holder: (row: R) => object | null;
   field: string | ((row: R) => string);
+  /** For a number inside a keyed table (a cycle's X_TOF): the row's key there. */
+  entry?: (row: R) => string;
   /** The point estimate when the interval is attached to another column (k beside its unit). */
   estimate?: (row: R) => Cell;
   /** Rounds (or rescales) a value for display, as the column's point estimate is. */
@@ -47,7 +49,9 @@ function header(spec: IntervalSpec<unknown>, part: string): string {
 
 /** The interval of a spec's quantity in a row, or null. */
 export function intervalAt<R>(spec: IntervalSpec<R>, row: R): ReportInterval | null {
-  return intervalOf(spec.holder(row) as Holder | null, typeof spec.field === 'string' ? spec.field : spec.field(row));
+  const holder = spec.holder(row) as Holder | null;
+  const field = typeof spec.field === 'string' ? spec.field : spec.field(row);
+  return spec.entry ? entryIntervalOf(holder, field, spec.entry(row)) : intervalOf(holder, field);
 }
 
 /**

@@ -11,6 +11,7 @@ const TITLES: Record<Exclude<keyof AnalysisTables, 'uncertainty'>, string> = {
   steps: 'Steps',
   effectiveBarriers: 'Effective barriers',
   energeticSpans: 'Energetic span',
+  tofControl: 'Degree of TOF control',
   comparisons: 'Comparisons',
 };
 

@@ -45,6 +45,7 @@ export function reportContent(pages: ReportPages, doc: Document, analysis: Docum
   section(pages, 'Steps', stepsForPage(report, energyDecimals(s, s.unit)), 'Rate constants from the Eyring equation with their units; t½ is the first-order half-life of the forward step.');
   section(pages, 'Effective barriers', tables.effectiveBarriers);
   section(pages, 'Energetic span of catalytic cycles', tables.energeticSpans, report.pathways.some((p) => p.energeticSpan) ? `Convention: ${report.pathways.find((p) => p.energeticSpan)!.energeticSpan!.convention}.` : undefined);
+  if (tables.tofControl.rows.length > 0) section(pages, 'Degree of TOF control', tables.tofControl, "X_TOF of each cycle state: the share of the TOF's sensitivity to that state's energy (Kozuch & Shaik, Acc. Chem. Res. 44, 101 (2011)); in each cycle the TSs' shares add up to 100 %, and so do the intermediates'.");
   section(pages, 'Comparisons', tables.comparisons);
   if (uncertain) uncertaintySection(pages, uncertain, energyDecimals(s, s.unit));
   pages.heading('Methods');

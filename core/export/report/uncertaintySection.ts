@@ -12,6 +12,7 @@ const SUBSECTIONS = [
   ['steps', 'Steps'],
   ['effectiveBarriers', 'Effective barriers'],
   ['energeticSpans', 'Energetic span'],
+  ['tofControl', 'Degree of TOF control'],
   ['comparisons', 'Comparisons'],
 ] as const;
 

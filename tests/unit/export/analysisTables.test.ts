@@ -8,7 +8,7 @@ const tables = analysisTables(analysedDocument().report, 1);
 describe('analysisTables', () => {
   it('names a unit in every energy, time and rate header', () => {
     for (const t of Object.values(tables)) {
-      for (const c of t.columns) if (/Δ|δE|TOF|t½|barrier/.test(c)) expect(c, c).toMatch(/\/ (kcal mol⁻¹|s|s⁻¹)$/);
+      for (const c of t.columns) if (/Δ|δE|TOF|t½|barrier/.test(c)) expect(c, c).toMatch(/\/ (kcal mol⁻¹|s|s⁻¹|%)$/);
     }
     expect(tables.steps.columns).toContain('k forward unit');
   });
@@ -22,6 +22,17 @@ describe('analysisTables', () => {
     expect(first[7]).toBe(9936);
     expect(first[8]).toBe('s⁻¹');
     expect(tables.energeticSpans.rows).toEqual([['cycle A', 22.5, 'T3', 'I2', 1.664e-4, 1.998e-4, 22.6, -2]]);
+  });
+
+  // X_TOF of cycle A's TSs and intermediates (tests/REFERENCES.md §6: Kozuch & Shaik ACR 2011 formulas,
+  // steady state by mpmath and central finite differences), shown in %, 4 significant digits.
+  it('lists the degree of TOF control of every cycle state, TSs then intermediates', () => {
+    const pct = (x: number) => Number((100 * x).toPrecision(4));
+    expect(tables.tofControl.columns).toEqual(['cycle', 'state', 'kind', 'X_TOF / %']);
+    expect(tables.tofControl.rows).toEqual([
+      ...['T1', 'T2', 'T3', 'T4'].map((s, i) => ['cycle A', s, 'TS', pct([1.612168663e-5, 0.06878445147, 0.9311988761, 5.507427872e-7][i]!)]),
+      ...['I1', 'I2', 'I3', 'I4'].map((s, i) => ['cycle A', s, 'intermediate', pct([3.724871973e-5, 0.9309932243, 0.06876809744, 2.01429519e-4][i]!)]),
+    ]);
   });
 
   it('gives effective barriers and the rate comparison', () => {

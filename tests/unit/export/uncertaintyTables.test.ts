@@ -89,6 +89,13 @@ describe('analysis tables with a Monte Carlo run: cycle A and a rate comparison,
     expect(column(tables.comparisons, 'ΔΔG‡, median / kcal mol⁻¹')).toEqual([kcal(q(run, 'comparison 0/ddG').median)]);
   });
 
+  it('gives the median and 95 % interval of each state\'s X_TOF, in %', () => {
+    const pct = (x: number) => Number((100 * x).toPrecision(4));
+    expect(column(tables.tofControl, 'X_TOF, median / %')[2]).toBe(pct(q(run, 'A/span/xTof/T3').median));
+    expect(column(tables.tofControl, 'X_TOF, 2.5 % / %')[5]).toBe(pct(q(run, 'A/span/xTof/I2').low));
+    expect(column(tables.tofControl, 'X_TOF, 97.5 % / %')[5]).toBe(pct(q(run, 'A/span/xTof/I2').high));
+  });
+
   it('gives P(TDTS), P(TDI) and P(candidate faster) as the run counted them', () => {
     const tdts = run.choices.find((c) => c.key === 'A/span/tdts')!.probabilities;
     const rows = tables.uncertainty!.probabilities.rows.filter((r) => r[1] === 'TDTS');

@@ -101,7 +101,9 @@ test('save as downloads text that loads as the same document', async ({ page }) 
 });
 
 test('a valid file opened replaces the document', async ({ page }) => {
-  const other = { ...JSON.parse(demoText), title: 'Second scenario (invented)' };
+  // Written as an older format-2 file (no reference setting yet): opening it says it was migrated.
+  const other = { ...JSON.parse(demoText), version: 2, title: 'Second scenario (invented)' };
+  delete other.settings.reference;
   other.pathways[0].name = 'Renamed route';
   const chooser = page.waitForEvent('filechooser');
   await page.getByRole('button', { name: 'Open…' }).click();
@@ -109,7 +111,6 @@ test('a valid file opened replaces the document', async ({ page }) => {
   await expect(page.getByRole('heading', { level: 1 })).toHaveText('Second scenario (invented)');
   await expect(page.getByRole('table', { name: 'Renamed route', exact: true })).toBeVisible();
   await expect(page.getByRole('status', { name: 'Document status' })).toHaveText('Opened second.passline (updated from format version 2; saving writes the new version).');
-  // (the demo is a format-2 file: opening it says it was migrated)
 });
 
 test('the built page carries the strict Content-Security-Policy', async ({ page }) => {

@@ -16,6 +16,10 @@ for (const [width, height] of [[1280, 800], [1920, 1080]] as const) {
     await page.setViewportSize({ width, height });
     // The figure re-fits its width after a resize on the next frames: wait for the layout to settle.
     await expect.poll(() => sidewaysScrollers(page), { timeout: 15_000 }).toEqual([]);
+    // The document settings sit on one row (the axis note gives way below 1400 px; the figure's axis says it).
+    const middles = await page.getByRole('group', { name: 'Document settings' }).evaluate((bar) => [...bar.children]
+      .map((c) => c.getBoundingClientRect()).filter((r) => r.width > 0).map((r) => r.top + r.height / 2));
+    expect(Math.max(...middles) - Math.min(...middles)).toBeLessThan(6);
     const figure = page.getByRole('group', { name: 'Levels of the figure' });
     // The last point of the last pathway: its actions are inside the window, the figure still shown.
     const last = page.getByRole('region', { name: 'Pathway LA cycle' }).getByRole('button', { name: /^Delete / }).last();

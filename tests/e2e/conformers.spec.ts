@@ -41,3 +41,21 @@ test('a TS1 conformer added with a lower G correction lowers TS1 in the mechanis
   await page.getByRole('tab', { name: 'Mechanism' }).click();
   await expect(ts1).toHaveText('23.3');
 });
+
+test('a conformer σ gives each population its 95 % interval, sampled off the page', async ({ page }) => {
+  await page.setViewportSize({ width: 1280, height: 800 });
+  await page.getByRole('tab', { name: /Species/ }).click();
+  await page.getByRole('button', { name: 'Conformers of TS1 (1)' }).click();
+  const table = page.getByRole('table', { name: 'Conformers of TS1' });
+  await page.getByRole('button', { name: 'Add conformer to TS1' }).click();
+  await table.getByRole('textbox', { name: 'G correction, conformer 2 of TS1' }).fill('0.25764');
+  // σ of 0.0016 Eh (about 1 kcal/mol) on conformer 2's electronic energy: the share 84.3 % of the
+  // previous test now spreads; its ends are the logistic of the gap ± 1.959964 σ (normal quantiles).
+  const sigmaColumns = page.getByRole('checkbox', { name: 'σ (standard uncertainty)' });
+  if (!(await sigmaColumns.isChecked())) await sigmaColumns.check();
+  await table.getByRole('textbox', { name: /^σ.*conformer 2 of TS1$/ }).first().fill('0.0016');
+  await expect(page.getByText(/In brackets: 95 % interval .* N = \d+ Monte Carlo samples, seed \d+, from 1 conformer σ/)).toBeVisible({ timeout: 20_000 });
+  await expect(table.getByLabel(/^Population of conformer 2 of TS1/)).toHaveText(/^84\.3 \(\d+\.\d to \d+\.\d\)$/);
+  await table.getByLabel(/^Population of conformer 2 of TS1/).scrollIntoViewIfNeeded();
+  await page.screenshot({ path: 'test-results/conformer-intervals.png' });
+});

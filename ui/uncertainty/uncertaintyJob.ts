@@ -1,5 +1,6 @@
 import type { Document } from '../../core/model/schema.ts';
 import { startUncertainty, type UncertaintyResult } from '../../core/uncertainty/uncertaintyRun.ts';
+import { startConformerUncertainty, type ConformerIntervals } from '../../core/uncertainty/conformerUncertainty.ts';
 
 /** A Monte Carlo run that can be advanced in slices (progress and cancelling between them). */
 export interface SampledRun<R> {
@@ -16,12 +17,15 @@ export interface SampledRun<R> {
 export interface JobKinds {
   /** Intervals of the analysis (the app's shared runner: panel, figure, exports). */
   analysis: { params: null; result: UncertaintyResult };
+  /** Population intervals of one species' conformers (the species sheet's conformer table). */
+  conformers: { params: { species: string }; result: ConformerIntervals };
 }
 export type JobKind = keyof JobKinds;
 type Starter<K extends JobKind> = (doc: Document, size: { samples: number; seed: number }, params: JobKinds[K]['params']) => SampledRun<JobKinds[K]['result']>;
 
 const STARTERS: { [K in JobKind]: Starter<K> } = {
   analysis: (doc, size) => startUncertainty(doc, size),
+  conformers: (doc, size, params) => startConformerUncertainty(doc, params.species, size),
 };
 
 /** A request to the sampler: the kind, the document (a plain object), the run's size and seed. */

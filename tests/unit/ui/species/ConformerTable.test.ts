@@ -82,3 +82,28 @@ describe('ConformerTable', () => {
     expect(screen.getByRole('button', { name: 'Conformers of SA (2)' })).toBeTruthy();
   });
 });
+
+describe('ConformerTable population intervals', () => {
+  it('shows each population\'s 95 % interval from the conformers\' σ, with N and the seed', async () => {
+    // Two invented conformers of equal G, each E with σ = 1 kcal/mol: the percentiles of p₁ are
+    // 1/(1 + exp(±1.959964·√2·σ/RT)) = 0.9 % and 99.1 % (normal quantiles through the logistic; see
+    // tests/unit/uncertainty/conformerUncertainty.test.ts).
+    const sigma = 1 / KCAL_PER_HARTREE;
+    const doc = makeDocument({
+      settings: { uncertainty: { samples: 4000, seed: 2 } },
+      species: [{ id: 'sa', label: 'SA', structures: [{ label: 'a', electronic: -400.1, gCorrection: 0.2, sigma }, { label: 'b', electronic: -400.1, gCorrection: 0.2, sigma }] }],
+      pathways: [{ id: 'p', name: 'Route', points: [{ id: 'a', label: 'A', kind: 'min', energy: { mode: 'species', terms: [{ species: 'sa', count: 1 }] } }] }],
+    } as never);
+    const store = new DocumentStore(createFakeHost().host, doc, 'conformers.passline');
+    render(SpeciesSheet, { store });
+    await fireEvent.click(screen.getByRole('button', { name: 'Conformers of SA (2)' }));
+    const table = screen.getByRole('table', { name: 'Conformers of SA' });
+    await screen.findByText(/95 % interval .* N = 4000 Monte Carlo samples, seed 2/, undefined, { timeout: 5000 });
+    const [first] = shares(table);
+    const m = /^50\.0 \((\d+\.\d) to (\d+\.\d)\)$/.exec(first!);
+    expect(m, first!).not.toBeNull();
+    expect(Math.abs(Number(m![1]) - 0.9)).toBeLessThan(0.3);
+    expect(Math.abs(Number(m![2]) - 99.1)).toBeLessThan(0.3);
+    await tick();
+  });
+});

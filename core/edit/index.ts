@@ -1,4 +1,4 @@
-export { insertPoint, deletePoint, duplicatePoint, movePoint, setKind, setLabel, setEnergy, setPointMolecule, energyProblem, type PointRef } from './pointEdits.ts';
+export { insertPoint, deletePoint, duplicatePoint, movePoint, setKind, setLabel, setEnergy, setPointMolecule, setMoleculeSide, energyProblem, type PointRef } from './pointEdits.ts';
 export { insertPathway, deletePathway, duplicatePathway, movePathway, setPathwayName, setCycle, setStyle } from './pathwayEdits.ts';
 export { setSettings, settingsProblem, setFigure, setTitle } from './settingsEdits.ts';
 export { setReference, referenceProblem, referencePoint, referenceFallback, referenceSummary } from './referenceEdits.ts';

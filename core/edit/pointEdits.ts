@@ -90,6 +90,18 @@ export function setPointMolecule(doc: Document, args: PointRef & { text: string;
 }
 
 /**
+ * Which side of its level a point's drawing goes: 'above' or 'below', or undefined to follow
+ * the figure's choice (figure.molecules.side).
+ */
+export function setMoleculeSide(doc: Document, args: PointRef & { side: 'above' | 'below' | undefined }): Document {
+  return mapPoint(doc, args.pathway, args.point, (p) => {
+    if (p.moleculeSide === args.side) return p;
+    const { moleculeSide: _, ...rest } = p;
+    return args.side === undefined ? rest : { ...rest, moleculeSide: args.side };
+  });
+}
+
+/**
  * Sets how a point's energy is given. An energy the schema would refuse (a NaN, an empty
  * species list) leaves the document as it is; use {@link energyProblem} to say why.
  */

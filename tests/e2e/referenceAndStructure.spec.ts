@@ -62,6 +62,11 @@ test('a SMILES typed for a point is drawn beside its level; one the toolkit cann
   expect(bar && box).toBeTruthy();
   expect(Math.abs((box!.x + box!.width / 2) - (bar!.x + bar!.width / 2))).toBeLessThan(3 * bar!.width);
   await page.screenshot({ path: 'test-results/point-structure.png' });
+  // Drawn above by default; the row's side choice puts it below the bar.
+  expect(box!.y + box!.height).toBeLessThanOrEqual(bar!.y + bar!.height / 2);
+  await entry.locator('..').getByRole('combobox', { name: 'Side of the drawing of LA·AE' }).selectOption('below');
+  await expect.poll(async () => (await drawn.first().boundingBox())!.y).toBeGreaterThan(bar!.y);
+  await page.screenshot({ path: 'test-results/point-structure-below.png' });
 
   await entry.getByRole('button', { name: 'Remove the structure of LA·AE' }).click();
   await expect(page.locator('section.canvas svg.scene [data-role="structure"]')).toHaveCount(0);

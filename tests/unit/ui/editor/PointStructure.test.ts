@@ -8,6 +8,20 @@ import { routeStore } from './storeFixture.ts';
 const tsMolecule = (store: ReturnType<typeof routeStore>) => store.doc.pathways[0]!.points[1]!.molecule;
 
 describe('a point’s structure in the mechanism editor', () => {
+  it('chooses the side of its drawing, or follows the figure again', async () => {
+    const store = routeStore();
+    render(MechanismPanel, { store });
+    await fireEvent.click(screen.getByRole('button', { name: 'TS structure' }));
+    const side = screen.getByRole('combobox', { name: 'Side of the drawing of TS' }) as HTMLSelectElement;
+    expect(side.value).toBe('');
+    expect(side.options[0]!.textContent).toBe('as the figure (above)');
+    await fireEvent.change(side, { target: { value: 'below' } });
+    expect(store.doc.pathways[0]!.points[1]!.moleculeSide).toBe('below');
+    await fireEvent.change(side, { target: { value: '' } });
+    expect('moleculeSide' in store.doc.pathways[0]!.points[1]!).toBe(false);
+    expect(store.history.past).toHaveLength(2);
+  });
+
   it('is set from a SMILES, refused with the toolkit’s message when it cannot be read, and cleared', async () => {
     const store = routeStore();
     render(MechanismPanel, { store });

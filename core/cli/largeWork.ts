@@ -27,6 +27,18 @@ export function largeWorkProgress(command: string, doc: Document, io: CliIo, wha
   return (done, total) => io.err(`passline ${command}: ${done}/${total} ${what}\n`);
 }
 
+/**
+ * For a document beyond the usual number of points, a reporter of the stages of one long
+ * piece of work whose parts cannot be counted (a figure's layout is one search): each call
+ * writes "stage… (t s)" on stderr with the time since the reporter was made; ordinary
+ * documents get a reporter that prints nothing.
+ */
+export function largeWorkStages(command: string, doc: Document, io: CliIo, now: () => number = Date.now): (stage: string) => void {
+  if (pointCount(doc) <= BOUNDS.pointCount.usual[1]) return () => {};
+  const start = now();
+  return (stage) => io.err(`passline ${command}: ${stage}… (${((now() - start) / 1000).toFixed(1)} s)\n`);
+}
+
 /** Seconds of silence before the first progress line, and between lines. */
 const PROGRESS_EVERY_MS = 1000;
 

@@ -17,7 +17,7 @@ import { applySettingOptions, boundedOption } from './options.ts';
 import { readBundledFont } from './fontFile.ts';
 import { writeOutput } from './writeOutput.ts';
 import { documentFindings } from './documentFindings.ts';
-import { noteLargeWork } from './largeWork.ts';
+import { largeWorkStages, noteLargeWork } from './largeWork.ts';
 import { missingGlyphs, missingGlyphsMessage } from '../export/missingGlyphs.ts';
 
 export interface RenderCliOptions {
@@ -59,6 +59,8 @@ export async function runRender(file: string, options: RenderCliOptions, io: Cli
   if (problem) throw new CliError(`--${problem.replace(/^width/, 'width-mm')}`, EXIT_USAGE);
   const doc = applySettingOptions(loadInput(file, io), options);
   noteLargeWork('render', doc, io);
+  const stage = largeWorkStages('render', doc, io);
+  stage('resolving the profile');
   const structures = await documentStructures(doc);
   const profile = resolveProfile(structures ? withStructureFormulas(doc, structures) : doc);
   const findings = documentFindings(doc, profile);
@@ -73,11 +75,14 @@ export async function runRender(file: string, options: RenderCliOptions, io: Cli
   const layout = { ...(preset ? { preset } : {}), ...(theme ? { theme } : {}), ...(widthMm !== undefined ? { widthMm } : {}), ...(structures ? { structures: pointDepictions(doc, structures) } : {}) };
   // Error bars set in the document's figure settings come from a Monte Carlo run (its samples and seed).
   const bars = doc.figure.errorBars;
+  if (bars) stage('sampling the error bars');
   const errorBars = bars ? await monteCarloErrorBars(doc, bars) : undefined;
   let omitted: Scene['omittedLabels'] = [];
-  const onScene = (scene: Scene) => { omitted = scene.omittedLabels; };
+  stage('laying out the figure');
+  const onScene = (scene: Scene) => { omitted = scene.omittedLabels; stage(`writing the ${format.toUpperCase()}`); };
   const data = await renderFigure(profile, doc, { format, fontBytes, metrics, onScene, ...layout, ...(dpi !== undefined ? { dpi } : {}), ...(errorBars ? { errorBars } : {}) });
   await writeOutput(options.output, data, io);
+  stage('done');
   const warning = omittedLabelsMessage(omitted);
   if (warning) io.err(`passline render: warning: ${warning}\n`);
   for (const f of findings) io.err(`passline render: ${f.severity}: ${f.message}\n`);

@@ -164,4 +164,15 @@ describe('large documents', () => {
     // and reports its progress as it goes, one line per temperature done
     expect(r.err).toContain('passline scan: 1/2 temperatures\npassline scan: 2/2 temperatures\n');
   }, 60_000);
+
+  it('render names each stage of a large figure as it starts, with the time so far', async () => {
+    const points = Array.from({ length: 601 }, (_, i) => ({ id: `p${i}`, label: `P${i}`, kind: i % 2 ? 'ts' : 'min', energy: { mode: 'value', value: i % 2 ? 10 : 0, unit: 'kcal/mol' } }));
+    const big = JSON.stringify({ format: 'passline', version: 3, pathways: [{ id: 'a', name: 'A', points }] });
+    const r = await run(['render', 'big.passline', '-o', 'big.svg'], { 'big.passline': big });
+    expect(r.code).toBe(0);
+    const stages = [...r.err.matchAll(/passline render: (.+?)… \((\d+\.\d) s\)/g)].map((m) => m[1]);
+    expect(stages).toEqual(['resolving the profile', 'laying out the figure', 'writing the SVG', 'done']);
+    const small = JSON.stringify({ format: 'passline', version: 3, pathways: [{ id: 'a', name: 'A', points: points.slice(0, 3) }] });
+    expect((await run(['render', 'small.passline', '-o', 'small.svg'], { 'small.passline': small })).err).not.toContain('laying out');
+  }, 60_000);
 });

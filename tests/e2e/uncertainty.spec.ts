@@ -4,7 +4,7 @@
 import { expect, test } from '@playwright/test';
 import { readFileSync } from 'node:fs';
 import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
-import { consoleErrors, dropFile, openEditor } from './editorHelpers.ts';
+import { consoleErrors, dropFile, openEditor, pointRow } from './editorHelpers.ts';
 
 const demo = JSON.parse(readFileSync(new URL('../../assets/demo/demo.passline', import.meta.url), 'utf8'));
 
@@ -58,6 +58,9 @@ test('error bars on the canvas follow the chosen kind and go away while a new ru
   // Every level whose energy varies: all but the two reference states (AE, LA + AE) and LA·AE of the cycle.
   await expect(bars).not.toHaveCount(0);
   const count = await bars.count();
+  // The mechanism table shows the same run's interval under each resolved energy (TS-th: 31.8 with σ 1.5 → about ±2.9).
+  await expect(pointRow(page, 'Thermal', 1).getByRole('cell').nth(4)).toHaveText(/^31\.8\s*2[89]\.\d to 3[45]\.\d$/);
+  await expect(pointRow(page, 'Thermal', 0).getByRole('cell').nth(4)).toHaveText('0.0');
   await expect(panel.getByRole('status')).toContainText('N = 2000 samples');
   await panel.getByRole('combobox', { name: 'Error bars on the figure' }).selectOption('sigma');
   await expect(bars).toHaveCount(count);
